@@ -1,0 +1,54 @@
+/**
+ * Friction laws: the conveyance K of one roughness subsection, so that Q = K·√Sf.
+ *
+ * - Manning (1891): K = (k/n)·A·R^(2/3), k = 1 (SI) or 1.486 (US).
+ * - Chézy (1775): K = C·A·√R, C in the unit system's own units (m^½/s or ft^½/s).
+ * - Darcy–Weisbach with Colebrook–White (1939): K = A·√(8gR/f), with f from
+ *   1/√f = −2·log10(ks/(14.8R) + 2.51/(Re·√f)), Re = 4RV/ν (the pipe formula with D = 4R, as used for
+ *   open channels, e.g. Chow 1959 §8-3 and Chadwick & Morfett, Hydraulics in Civil Engineering).
+ *   Without a discharge the fully rough limit (Re → ∞) is used.
+ */
+import { brentRoot } from '../core/roots.js';
+import type { Units } from '../core/units.js';
+import type { SubsectionElements } from '../geometry/section.js';
+
+export const FrictionLaw = { manning: 'manning', chezy: 'chezy', 'darcy-weisbach': 'darcy-weisbach' } as const;
+export type FrictionLaw = keyof typeof FrictionLaw;
+
+/** The name of the roughness value each law takes, for messages and tables. */
+export const roughnessName: Record<FrictionLaw, string> = {
+  manning: "Manning's n",
+  chezy: 'Chézy C',
+  'darcy-weisbach': 'equivalent sand roughness ks',
+};
+
+/** Darcy friction factor from Colebrook–White for hydraulic radius R, roughness ks and Reynolds number Re (Infinity: fully rough). */
+export function colebrookWhiteFactor(hydraulicRadius: number, ks: number, reynolds: number): number {
+  const relative = ks / (14.8 * hydraulicRadius);
+  if (!Number.isFinite(reynolds)) {
+    const x = -2 * Math.log10(relative);
+    return 1 / (x * x);
+  }
+  // x = 1/√f solves x + 2·log10(relative + 2.51·x/Re) = 0; the residual is increasing in x.
+  const residual = (x: number) => x + 2 * Math.log10(relative + (2.51 * x) / reynolds);
+  const x = brentRoot(residual, 0.5, 200, { xTolerance: 1e-12, what: 'Colebrook–White friction factor' });
+  return 1 / (x * x);
+}
+
+/** Conveyance of one subsection. `velocity` (mean velocity of the flow) matters only for Darcy–Weisbach. */
+export function subsectionConveyance(sub: SubsectionElements, law: FrictionLaw, units: Units, velocity?: number): number {
+  const { area, wettedPerimeter } = sub;
+  if (area <= 0 || wettedPerimeter <= 0) return 0;
+  const r = area / wettedPerimeter;
+  switch (law) {
+    case 'manning':
+      return (units.manningFactor / sub.roughness) * area * Math.cbrt(r * r);
+    case 'chezy':
+      return sub.roughness * area * Math.sqrt(r);
+    case 'darcy-weisbach': {
+      const reynolds = velocity === undefined || velocity <= 0 ? Infinity : (4 * r * velocity) / units.kinematicViscosity;
+      const f = colebrookWhiteFactor(r, sub.roughness, reynolds);
+      return area * Math.sqrt((8 * units.g * r) / f);
+    }
+  }
+}

@@ -1,0 +1,112 @@
+/**
+ * The result of a run: the structure `--json` prints and result.json holds (one entry per flow).
+ * Stations are distances from the upstream end, increasing downstream, unless the model says otherwise
+ * (then `stationing` tells how the user's numbers map). Every length is in `units`.
+ */
+import type { UnitSystem } from '../core/units.js';
+
+export type Regime = 'subcritical' | 'supercritical' | 'critical';
+export type SlopeClass = 'mild' | 'steep' | 'critical' | 'horizontal' | 'adverse';
+/** Profile types in the usual notation (Chow 1959 ch. 9). */
+export type ProfileType =
+  | 'M1' | 'M2' | 'M3'
+  | 'S1' | 'S2' | 'S3'
+  | 'C1' | 'C2' | 'C3'
+  | 'H2' | 'H3'
+  | 'A2' | 'A3'
+  | 'uniform';
+
+export interface StationResult {
+  station: number;
+  bedElevation: number;
+  depth: number;
+  wsel: number;
+  energyElevation: number;
+  velocity: number;
+  froude: number;
+  regime: Regime;
+  /** the reach this station belongs to (the downstream one at a break) */
+  reach?: string;
+  /** true where the station was interpolated between surveyed sections */
+  interpolated?: boolean;
+  /** critical depth at this station (for charts) */
+  criticalDepth?: number;
+  /** normal depth at this station, null where none exists */
+  normalDepth?: number | null;
+  /** bank or lining tops where known */
+  leftBank?: number;
+  rightBank?: number;
+}
+
+export interface ProfileStretch {
+  type: ProfileType;
+  from: number;
+  to: number;
+}
+
+export interface ReachResult {
+  id: string;
+  from: number;
+  to: number;
+  slopeClass: SlopeClass;
+  normalDepth: number | null;
+  criticalDepth: number;
+  profiles: ProfileStretch[];
+}
+
+/** Jump classification by upstream Froude number (Chow 1959 §15-3, after USBR tests). */
+export type JumpType = 'undular' | 'weak' | 'oscillating' | 'steady' | 'strong';
+
+export interface JumpResult {
+  /** toe station: where the specific force of the supercritical and subcritical profiles is equal */
+  station: number;
+  upstreamDepth: number;
+  downstreamDepth: number;
+  froude: number;
+  type: JumpType;
+  /** roller length from a published correlation (see the engine's jump module); reported, not used to move the toe */
+  length: number;
+  energyLoss: number;
+}
+
+export interface FreeboardRow {
+  station: number;
+  wsel: number;
+  energyElevation: number;
+  leftBank?: number;
+  rightBank?: number;
+  freeboardLeft?: number;
+  freeboardRight?: number;
+  required: number;
+  pass: boolean;
+  overtopped: boolean;
+}
+
+export interface StructureResult {
+  id: string;
+  type: string;
+  station: number;
+  /** the intermediate values an engineer checks by hand, with words */
+  values: Record<string, number | string | boolean | null>;
+  notes: string[];
+}
+
+export interface FlowResult {
+  id: string;
+  discharge: number;
+  stations: StationResult[];
+  reaches: ReachResult[];
+  jumps: JumpResult[];
+  structures?: StructureResult[];
+  freeboard?: FreeboardRow[];
+  warnings: string[];
+}
+
+export interface RunResult {
+  title?: string;
+  units: UnitSystem;
+  method: string;
+  flows: FlowResult[];
+  /** cautions that go with any result that sizes or checks works protecting people or property */
+  cautions: string[];
+}
