@@ -28,3 +28,10 @@ export const accuracyGoal = {
 export function accuracyFor(system: 'SI' | 'US', depth: number): number {
   return Math.max(accuracyGoal[system], accuracyGoal.relative * Math.abs(depth));
 }
+
+/** Geometry: a depth above a closed conduit's crown (or an irregular section's end point) by no more than
+ *  this fraction of that limit is round-off and is treated as being at the limit. */
+export const crownRoundoffFraction = 1e-12;
+/** Geometry: below this half-angle (rad) circular-segment formulas switch to their Taylor series, which
+ *  avoid the cancellation of θ − sin θ at shallow depth. */
+export const segmentSeriesAngle = 1e-2;
