@@ -1,0 +1,298 @@
+/**
+ * Irregular section given by station–elevation points across it (offset, elevation), left to right, with
+ * roughness that may change across the section.
+ *
+ * - Depth is measured from the lowest point (the invert); the water surface is level across the whole
+ *   section (level-pool assumption): every part of the ground below the surface is wet, including pockets
+ *   behind a bank high point.
+ * - The section holds water up to the lower of its two end points; a water surface above that is a
+ *   HydraulicError asking for the section to be extended, never a silent extrapolation.
+ * - Roughness subsections follow Chow 1959 (Open-Channel Hydraulics, §6-4, the divided-channel method):
+ *   the flow area is split by vertical lines at each change of roughness, and those lines carry no wetted
+ *   perimeter. Adjacent zones with the same value are merged (there is no change of roughness there).
+ *   Each roughness zone gives one subsection; separate wet pockets inside one zone are summed into it.
+ *
+ * Speed: everything that does not depend on depth is done once. Zone boundaries are inserted as points,
+ * the distinct point elevations are sorted, and for each interval between consecutive elevations the
+ * set of fully wet and partly wet ground segments is fixed, so with u = depth above the interval's base
+ *   T(u) = T₀ + s·u,  A(u) = A₀ + T₀·u + s·u²/2,  A·ȳ(u) = M₀ + A₀·u + T₀·u²/2 + s·u³/6,  P(u) = P₀ + p·u
+ * (dA/dy = T and d(Aȳ)/dy = A). These are the exact polygon formulas; a look-up is a binary search and
+ * a few multiplications. Coefficients are stored per interval for the whole section and for each zone.
+ */
+import { HydraulicError } from '../../core/errors.js';
+import type { Elements, Section, SubsectionElements } from '../section.js';
+import { aboveLimit, checkDepth } from '../depth.js';
+
+/** [offset, elevation] */
+export type StationElevation = readonly [number, number];
+/** [fromOffset, roughness]: the value applies from this offset to the next zone's start */
+export type RoughnessZoneSpec = readonly [number, number];
+
+export interface PointsSpec {
+  /** [offset, elevation] pairs, offsets non-decreasing (equal offsets make a vertical wall) */
+  readonly points: readonly StationElevation[];
+  /** one value for the whole section, or zones [fromOffset, value] in increasing order of offset;
+   *  the first zone also covers any ground left of its start */
+  readonly roughness: number | readonly RoughnessZoneSpec[];
+}
+
+/** A roughness zone after merging equal neighbours: from `from` to `to` (end points' offsets at the ends). */
+export interface RoughnessZone {
+  readonly from: number;
+  readonly to: number;
+  readonly value: number;
+}
+
+export interface EndPoint {
+  readonly offset: number;
+  readonly elevation: number;
+}
+
+export interface PointsSection extends Section {
+  readonly shape: 'points';
+  /** elevation of the lowest point: stage = invertElevation + depth */
+  readonly invertElevation: number;
+  readonly leftEnd: EndPoint;
+  readonly rightEnd: EndPoint;
+  /** the ground points as given (copied), left to right */
+  readonly points: readonly StationElevation[];
+  /** roughness zones, left to right, covering the section from end to end */
+  readonly zones: readonly RoughnessZone[];
+}
+
+/** Coefficients per interval and group: A0, T0, s, P0, p, M0. */
+const A0 = 0;
+const T0 = 1;
+const S = 2;
+const P0 = 3;
+const PS = 4;
+const M0 = 5;
+const STRIDE = 6;
+
+export function isPointsSection(section: Section): section is PointsSection {
+  return section.shape === 'points' && 'zones' in section && 'invertElevation' in section;
+}
+
+/** The end points of a points section (offsets and elevations), e.g. as bank positions. */
+export function pointsBounds(section: PointsSection): { left: EndPoint; right: EndPoint } {
+  return { left: section.leftEnd, right: section.rightEnd };
+}
+
+/** The zones of a spec, merged where neighbours have equal values, clipped to [left, right]. */
+export function roughnessZones(roughness: PointsSpec['roughness'], left: number, right: number): RoughnessZone[] {
+  if (typeof roughness === 'number') return [{ from: left, to: right, value: roughness }];
+  const merged: { from: number; value: number }[] = [];
+  for (const [from, value] of roughness) {
+    const last = merged[merged.length - 1];
+    if (last !== undefined && last.value === value) continue;
+    merged.push({ from, value });
+  }
+  // zones starting at or before the left end: only the last of them reaches the ground
+  while (merged.length > 1 && merged[1]!.from <= left) merged.shift();
+  const zones: RoughnessZone[] = [];
+  for (let i = 0; i < merged.length; i++) {
+    const from = i === 0 ? left : Math.min(merged[i]!.from, right);
+    const next = merged[i + 1];
+    const to = next === undefined ? right : Math.min(next.from, right);
+    if (i > 0 && from >= right) break;
+    zones.push({ from, to, value: merged[i]!.value });
+  }
+  return zones;
+}
+
+/** The zone of a ground segment: the zone that holds its mid offset (a wall on a boundary goes right). */
+function zoneIndexAt(zones: readonly RoughnessZone[], offset: number): number {
+  let k = 0;
+  for (let i = 1; i < zones.length; i++) if (zones[i]!.from <= offset) k = i;
+  return k;
+}
+
+/**
+ * Build a points section. The spec is assumed valid (createSection in ../index.ts validates it):
+ * at least 3 points, offsets non-decreasing, the lowest point below both end points.
+ */
+export function points(spec: PointsSpec): PointsSection {
+  const given = spec.points.map(([x, z]) => [x, z] as const);
+  const first = given[0]!;
+  const last = given[given.length - 1]!;
+  const zones = roughnessZones(spec.roughness, first[0], last[0]);
+
+  // ground points with the zone boundaries inserted (no repeated identical points)
+  const xs: number[] = [];
+  const zs: number[] = [];
+  const push = (x: number, z: number) => {
+    const n = xs.length;
+    if (n > 0 && xs[n - 1] === x && zs[n - 1] === z) return;
+    xs.push(x);
+    zs.push(z);
+  };
+  let boundary = 1;
+  for (let i = 0; i < given.length; i++) {
+    const [x, z] = given[i]!;
+    if (i > 0) {
+      const [xp, zp] = given[i - 1]!;
+      while (boundary < zones.length && zones[boundary]!.from <= xp) boundary++;
+      while (boundary < zones.length && zones[boundary]!.from < x) {
+        const b = zones[boundary]!.from;
+        push(b, zp + ((z - zp) * (b - xp)) / (x - xp));
+        boundary++;
+      }
+    }
+    push(x, z);
+  }
+
+  const segments = xs.length - 1;
+  const segZone = new Int32Array(segments);
+  const segLow = new Float64Array(segments);
+  const segHigh = new Float64Array(segments);
+  let invert = Infinity;
+  for (const z of zs) invert = Math.min(invert, z);
+  for (let j = 0; j < segments; j++) {
+    segZone[j] = zoneIndexAt(zones, 0.5 * (xs[j]! + xs[j + 1]!));
+    // elevations relative to the invert, so shallow depths keep their precision
+    segLow[j] = Math.min(zs[j]!, zs[j + 1]!) - invert;
+    segHigh[j] = Math.max(zs[j]!, zs[j + 1]!) - invert;
+  }
+
+  // distinct elevations above the invert, ascending: the interval bases
+  const levels = Float64Array.from(new Set(zs.map((z) => z - invert))).sort();
+  const intervals = levels.length;
+  const groups = zones.length + 1; // group 0: the whole section; 1 + k: zone k
+  const coef = new Float64Array(intervals * groups * STRIDE);
+  const wetZones: number[][] = [];
+  for (let k = 0; k < intervals; k++) {
+    const e = levels[k]!;
+    const wet = new Set<number>();
+    for (let j = 0; j < segments; j++) {
+      const lo = segLow[j]!;
+      if (lo > e) continue; // dry throughout this interval
+      const hi = segHigh[j]!;
+      const dx = xs[j + 1]! - xs[j]!;
+      const dz = hi - lo;
+      const length = Math.hypot(dx, dz);
+      let a: number, t: number, s: number, p0: number, ps: number, m: number;
+      if (hi <= e) {
+        // fully wet: a trapezoid of water over the segment
+        const d0 = e - (zs[j]! - invert);
+        const d1 = e - (zs[j + 1]! - invert);
+        a = 0.5 * dx * (d0 + d1);
+        t = dx;
+        s = 0;
+        p0 = length;
+        ps = 0;
+        m = (dx * (d0 * d0 + d0 * d1 + d1 * d1)) / 6;
+      } else {
+        // partly wet: the water's edge lies on this segment for the whole interval
+        const d = e - lo;
+        const w = (dx * d) / dz;
+        a = 0.5 * w * d;
+        t = w;
+        s = dx / dz;
+        p0 = (length * d) / dz;
+        ps = length / dz;
+        m = (w * d * d) / 6;
+      }
+      for (const g of [0, 1 + segZone[j]!]) {
+        const o = (k * groups + g) * STRIDE;
+        coef[o + A0] = coef[o + A0]! + a;
+        coef[o + T0] = coef[o + T0]! + t;
+        coef[o + S] = coef[o + S]! + s;
+        coef[o + P0] = coef[o + P0]! + p0;
+        coef[o + PS] = coef[o + PS]! + ps;
+        coef[o + M0] = coef[o + M0]! + m;
+      }
+      wet.add(segZone[j]!);
+    }
+    wetZones.push([...wet].sort((p, q) => p - q));
+  }
+
+  const maxDepth = Math.min(first[1], last[1]) - invert;
+  const zoneValues = zones.map((zone) => zone.value);
+
+  /** index of the interval holding depth y (the last level ≤ y) */
+  const intervalOf = (y: number): number => {
+    let lo = 0;
+    let hi = intervals - 1;
+    while (lo < hi) {
+      const mid = (lo + hi + 1) >> 1;
+      if (levels[mid]! <= y) lo = mid;
+      else hi = mid - 1;
+    }
+    return lo;
+  };
+
+  const check = (y: number): void => {
+    checkDepth(y, 'points');
+    if (aboveLimit(y, maxDepth)) {
+      throw new HydraulicError(
+        `points section: the water surface at elevation ${invert + y} (depth ${y}) is above the lower end point ` +
+          `(left end elevation ${first[1]}, right end elevation ${last[1]}); the section must be extended`,
+      );
+    }
+  };
+
+  const elements = (depth: number): Elements => {
+    check(depth);
+    const y = Math.min(depth, maxDepth);
+    const k = intervalOf(y);
+    const u = y - levels[k]!;
+    const o = k * groups * STRIDE;
+    const a = coef[o + A0]!;
+    const t = coef[o + T0]!;
+    const s = coef[o + S]!;
+    return {
+      area: a + u * (t + 0.5 * s * u),
+      wettedPerimeter: coef[o + P0]! + coef[o + PS]! * u,
+      topWidth: t + s * u,
+      firstMoment: coef[o + M0]! + u * (a + u * (0.5 * t + (s * u) / 6)),
+    };
+  };
+
+  const subsections = (depth: number): SubsectionElements[] => {
+    check(depth);
+    const y = Math.min(depth, maxDepth);
+    const k = intervalOf(y);
+    const u = y - levels[k]!;
+    const list = wetZones[k]!;
+    const out: SubsectionElements[] = new Array(list.length);
+    for (let i = 0; i < list.length; i++) {
+      const zone = list[i]!;
+      const o = (k * groups + 1 + zone) * STRIDE;
+      const t = coef[o + T0]!;
+      const s = coef[o + S]!;
+      out[i] = {
+        area: coef[o + A0]! + u * (t + 0.5 * s * u),
+        wettedPerimeter: coef[o + P0]! + coef[o + PS]! * u,
+        topWidth: t + s * u,
+        roughness: zoneValues[zone]!,
+      };
+    }
+    return out;
+  };
+
+  const copied: StationElevation[] = given.map(([x, z]) => [x, z] as const);
+  return {
+    shape: 'points',
+    closed: false,
+    maxDepth,
+    lengthScale: maxDepth,
+    compound: zones.length > 1,
+    elements,
+    subsections,
+    describe: () => ({
+      shape: 'points',
+      points: copied.length,
+      leftOffset: first[0],
+      rightOffset: last[0],
+      invertElevation: invert,
+      maxDepth,
+      zones: zones.length,
+      roughness: zones.length === 1 ? zones[0]!.value : zones.map((z) => `${z.value} from ${z.from}`).join(', '),
+    }),
+    invertElevation: invert,
+    leftEnd: { offset: first[0], elevation: first[1] },
+    rightEnd: { offset: last[0], elevation: last[1] },
+    points: copied,
+    zones,
+  };
+}
