@@ -67,6 +67,34 @@ export interface JumpResult {
   /** roller length from a published correlation (see the engine's jump module); reported, not used to move the toe */
   length: number;
   energyLoss: number;
+  /** the correlation `length` comes from (added by the profile engine; optional for older readers) */
+  lengthMethod?: string;
+  /** true when the toe lies at a control or channel end (jump drowned up to it, or held there) */
+  atControl?: boolean;
+}
+
+/** A control the profile engine used (or ignored), with why. Added by the profile engine. */
+export interface ControlRecord {
+  station: number;
+  /** 'upstream boundary', 'downstream boundary', 'critical depth at a break', a structure kind... */
+  kind: string;
+  depth: number | null;
+  regime: Regime | null;
+  /** 'used' when it controls the profile, 'ignored' when the regime does not need it, 'replaced' when it cannot hold */
+  status: 'used' | 'ignored' | 'replaced';
+  reason: string;
+}
+
+/** Where a computed profile ran into critical depth (or a conduit crown) and stopped. Added by the profile engine. */
+export interface ProfileStop {
+  station: number;
+  depth: number;
+  reason: 'critical' | 'full';
+  /** the direction the profile was being computed in */
+  direction: 'upstream' | 'downstream';
+  /** true when a jump or control downstream/upstream resolved it; false means the result needs attention */
+  resolved: boolean;
+  message: string;
 }
 
 export interface FreeboardRow {
@@ -100,6 +128,14 @@ export interface FlowResult {
   structures?: StructureResult[];
   freeboard?: FreeboardRow[];
   warnings: string[];
+  /** informational notes (boundaries ignored, controls assumed); added by the profile engine */
+  notes?: string[];
+  /** the controls used or ignored; added by the profile engine */
+  controls?: ControlRecord[];
+  /** where computed profiles stopped at critical depth; added by the profile engine */
+  stops?: ProfileStop[];
+  /** the method, averaging and accuracy goal this flow was computed with; added by the profile engine */
+  computation?: { method: string; frictionAveraging: string; accuracyGoal: string; internalSteps: number };
 }
 
 export interface RunResult {
