@@ -1,0 +1,173 @@
+/**
+ * Every user-facing message of the model and flag checks (after vega-lite's log/message module): one function
+ * per message, so wording is reviewed in one place and tests pin it exactly. A message says what was found
+ * and what is accepted; the place (JSON path or flag) is the Problem's `where`.
+ */
+import { manningRange, alphaRange, slopeLimit, minimumPoints } from './limits.js';
+
+/** A value as a user would recognise it in their file. */
+export function describeValue(value: unknown): string {
+  if (value === undefined) return 'nothing';
+  if (value === null) return 'null';
+  if (typeof value === 'string') return JSON.stringify(value);
+  if (typeof value === 'number') return String(value);
+  if (typeof value === 'boolean') return String(value);
+  if (Array.isArray(value)) {
+    const text = JSON.stringify(value);
+    return text.length <= 40 ? text : `a list of ${value.length}`;
+  }
+  if (typeof value === 'object') return 'an object';
+  return String(value);
+}
+
+function quoted(values: readonly string[]): string {
+  return values.map((v) => JSON.stringify(v)).join(', ');
+}
+
+/** The closest of `candidates` to `word` within a small edit distance, for "did you mean". */
+export function closest(word: string, candidates: readonly string[]): string | undefined {
+  let best: string | undefined;
+  let bestDistance = Math.max(2, Math.floor(word.length / 3)) + 1;
+  for (const c of candidates) {
+    const d = editDistance(word.toLowerCase(), c.toLowerCase());
+    if (d < bestDistance) {
+      best = c;
+      bestDistance = d;
+    }
+  }
+  return best;
+}
+
+function editDistance(a: string, b: string): number {
+  const row = Array.from({ length: b.length + 1 }, (_, j) => j);
+  for (let i = 1; i <= a.length; i++) {
+    let previous = row[0]!;
+    row[0] = i;
+    for (let j = 1; j <= b.length; j++) {
+      const above = row[j]!;
+      row[j] = Math.min(above + 1, row[j - 1]! + 1, previous + (a[i - 1] === b[j - 1] ? 0 : 1));
+      previous = above;
+    }
+  }
+  return row[b.length]!;
+}
+
+function suggestion(word: string, candidates: readonly string[]): string {
+  const c = closest(word, candidates);
+  return c === undefined ? '' : ` (did you mean ${JSON.stringify(c)}?)`;
+}
+
+// ---- types and shapes --------------------------------------------------------------------------------
+
+export const expected = (expectation: string, got: unknown): string => `expected ${expectation}, got ${describeValue(got)}`;
+
+export const missing = (expectation: string): string => `missing: expected ${expectation}`;
+
+export const expectedOneOf = (values: readonly string[], got: unknown): string =>
+  `expected one of ${quoted(values)}, got ${describeValue(got)}${typeof got === 'string' ? suggestion(got, values) : ''}`;
+
+export const missingOneOf = (values: readonly string[]): string => `missing: expected one of ${quoted(values)}`;
+
+export const unknownKey = (key: string, allowed: readonly string[]): string =>
+  `unknown key${suggestion(key, allowed)}; the keys allowed here are ${allowed.join(', ')}`;
+
+export const greaterThan = (limit: number, got: unknown): string => expected(`a number greater than ${limit}`, got);
+
+export const atLeast = (limit: number, got: unknown): string => expected(`a number of at least ${limit}`, got);
+
+export const atMost = (limit: number, got: unknown): string => expected(`a number of at most ${limit}`, got);
+
+export const lessThan = (limit: number, got: unknown): string => expected(`a number less than ${limit}`, got);
+
+export const listTooShort = (minimum: number, what: string, got: unknown): string =>
+  `expected at least ${minimum} ${what}, got ${Array.isArray(got) ? got.length : describeValue(got)}`;
+
+export const pair = (first: string, second: string): string => `a pair [${first}, ${second}] of numbers`;
+
+export const notFinite = (got: unknown): string => expected('a finite number', got);
+
+export const notJsonObject = (got: unknown): string =>
+  `${expected('a JSON object holding the model (see schema/gvf-model.schema.json)', got)}`;
+
+// ---- file reading ------------------------------------------------------------------------------------
+
+export const fileNotFound = (): string => 'no such file';
+
+export const fileUnreadable = (reason: string): string => `cannot read the file (${reason})`;
+
+export const fileEmpty = (): string =>
+  'the file is empty; expected a JSON object holding the model (see schema/gvf-model.schema.json)';
+
+export const jsonSyntax = (problem: string): string => `not valid JSON: ${problem}`;
+
+// ---- sections ----------------------------------------------------------------------------------------
+
+export const manningOutOfRange = (n: unknown, forceHint: string): string =>
+  `Manning's n must lie between ${manningRange.min} and ${manningRange.max}, got ${describeValue(n)}${forceHint}`;
+
+export const alphaOutOfRange = (alpha: unknown): string =>
+  `α must lie between ${alphaRange.min} and ${alphaRange.max} (it is 1 for uniform velocity), got ${describeValue(alpha)}`;
+
+export const noRoughness = (keys: readonly string[]): string =>
+  `a roughness is required: give one of ${keys.join(', ')} (Manning's n, Chézy C, or sand roughness ks)`;
+
+export const severalRoughness = (keys: readonly string[]): string =>
+  `give one roughness, not ${keys.join(' and ')}`;
+
+export const frictionMismatch = (friction: string, key: string, given: string): string =>
+  `the friction law "${friction}" takes its roughness from "${key}", but "${given}" was given`;
+
+export const roughnessTableOnlyForPoints = (): string =>
+  'a roughness table [[fromStation, value], ...] is only for "points" sections; give one number';
+
+export const roughnessTableStart = (first: number, sectionStart: number): string =>
+  `the first roughness station ${first} lies beyond the section's first point at ${sectionStart}; the table must cover the whole section`;
+
+export const roughnessTableOrder = (previous: number, got: number): string =>
+  `roughness stations must increase across the section: ${got} follows ${previous}`;
+
+export const pointsOrder = (previous: number, got: number): string =>
+  `stations across the section must not decrease: ${got} follows ${previous}`;
+
+export const pointsTooFew = (count: number): string =>
+  `an irregular section needs at least ${minimumPoints} points [station, elevation], got ${count}`;
+
+export const pointsNoLowPoint = (): string =>
+  'the section holds no water: both end points must lie above its lowest point';
+
+// ---- reaches, flows, boundaries ----------------------------------------------------------------------
+
+export const noSuchSection = (name: unknown, known: readonly string[]): string =>
+  `no section named ${describeValue(name)}${typeof name === 'string' ? suggestion(name, known) : ''}; the sections defined are ${quoted(known)}`;
+
+export const duplicateId = (what: string, id: string, firstIndex: number): string =>
+  `the ${what} id ${JSON.stringify(id)} is used twice (first at index ${firstIndex}); ids must be unique`;
+
+export const slopeTooLarge = (slope: unknown): string =>
+  `expected a bed slope as a fraction with magnitude below ${slopeLimit} (0.001 means 0.1 %), got ${describeValue(slope)}`;
+
+export const stageBelowBed = (elevation: number, bed: number, end: string): string =>
+  `the stage ${elevation} lies at or below the ${end} bed elevation ${round(bed)}; a stage is a water-surface elevation`;
+
+export const depthAboveCrown = (depth: number, crown: number, unit: string): string =>
+  `the depth ${depth} ${unit} lies above the conduit's crown at ${crown} ${unit}; a closed conduit holds at most its diameter`;
+
+export const depthAbovePoints = (depth: number, limit: number, unit: string): string =>
+  `the depth ${depth} ${unit} lies above the section's lower end point (at most ${round(limit)} ${unit}); extend the section`;
+
+// ---- command-line flags ------------------------------------------------------------------------------
+
+export const flagRequired = (what: string): string => `required: ${what}`;
+
+export const flagNotForShape = (shape: string, allowed: readonly string[]): string =>
+  `does not apply to a ${shape} section; a ${shape} section takes ${allowed.join(', ')}`;
+
+export const boundaryFlag = (got: unknown): string =>
+  expected('"normal", "critical" or a depth greater than 0', got);
+
+export const forceHintFlag = '; pass --force if the value is intended';
+export const forceHintModel = '; run with --force if the value is intended';
+
+function round(value: number): string {
+  return String(Math.round(value * 1e6) / 1e6);
+}

@@ -1,0 +1,140 @@
+/**
+ * validateModel: a parsed JSON value → a Model, or one InputError listing every problem found.
+ *
+ * Two passes: the schema (types, shapes, unknown keys) and then the rules that need the whole model
+ * (a reach naming a missing section, duplicated ids, roughness plausibility, a stage below the bed).
+ * The second pass also runs on the parts that passed the first, so one run reports as much as it can.
+ */
+import { InputError, type Problem } from '../../core/errors.js';
+import { slopeLimit } from './limits.js';
+import * as msg from './messages.js';
+import { formatPath, issueMessage, issuesToProblems } from './issues.js';
+import { sectionProblems } from './rules.js';
+import { modelSchema, sectionSchema } from './schema.js';
+import type { BoundarySpec, Model, SectionSpec } from './types.js';
+
+export interface ValidateOptions {
+  /** lift the roughness plausibility limits (the CLI's --force) */
+  readonly force?: boolean;
+}
+
+/** An InputError about one model file; `file` is the label the problems belong to. */
+export class ModelFileError extends InputError {
+  readonly file: string;
+  constructor(file: string, problems: readonly Problem[]) {
+    super(problems);
+    this.file = file;
+  }
+}
+
+const parseOptions = { reportInput: true, error: issueMessage } as const;
+
+export function validateModel(json: unknown, fileLabel: string, options: ValidateOptions = {}): Model {
+  if (json === null || typeof json !== 'object' || Array.isArray(json)) {
+    throw new ModelFileError(fileLabel, [{ where: fileLabel, message: msg.notJsonObject(json), value: json }]);
+  }
+  const parsed = modelSchema.safeParse(json, parseOptions);
+  const problems: Problem[] = parsed.success ? [] : issuesToProblems(parsed.error.issues, modelSchema, json);
+  problems.push(...modelRules(json as Record<string, unknown>, options));
+  if (problems.length > 0 || !parsed.success) throw new ModelFileError(fileLabel, dedupe(problems));
+  return parsed.data;
+}
+
+function dedupe(problems: Problem[]): Problem[] {
+  const seen = new Set<string>();
+  return problems.filter((p) => {
+    const key = `${p.where}\u0000${p.message}`;
+    if (seen.has(key)) return false;
+    seen.add(key);
+    return true;
+  });
+}
+
+const isRecord = (v: unknown): v is Record<string, unknown> => v !== null && typeof v === 'object' && !Array.isArray(v);
+
+/** The rules that look across the model, run on whatever parts are well typed. */
+function modelRules(raw: Record<string, unknown>, options: ValidateOptions): Problem[] {
+  const problems: Problem[] = [];
+  const sections = new Map<string, SectionSpec>();
+  const sectionNames = isRecord(raw.sections) ? Object.keys(raw.sections) : [];
+
+  if (isRecord(raw.sections)) {
+    if (sectionNames.length === 0) problems.push({ where: 'sections', message: msg.listTooShort(1, 'section', []) });
+    for (const name of sectionNames) {
+      const parsed = sectionSchema.safeParse(raw.sections[name], parseOptions);
+      if (!parsed.success) continue;
+      sections.set(name, parsed.data);
+      const base = formatPath(['sections', name]);
+      problems.push(...sectionProblems(parsed.data, (key) => `${base}.${key}`, { force: options.force, forceHint: msg.forceHintModel }));
+    }
+  }
+
+  const reaches = Array.isArray(raw.reaches) ? raw.reaches : [];
+  let fall = 0;
+  let lengthsKnown = true;
+  reaches.forEach((reach, i) => {
+    if (!isRecord(reach)) {
+      lengthsKnown = false;
+      return;
+    }
+    if (typeof reach.section === 'string' && isRecord(raw.sections) && !sectionNames.includes(reach.section)) {
+      problems.push({ where: `reaches[${i}].section`, message: msg.noSuchSection(reach.section, sectionNames), value: reach.section });
+    }
+    if (typeof reach.slope === 'number' && Math.abs(reach.slope) >= slopeLimit) {
+      problems.push({ where: `reaches[${i}].slope`, message: msg.slopeTooLarge(reach.slope), value: reach.slope });
+    }
+    if (typeof reach.slope === 'number' && typeof reach.length === 'number') fall += reach.slope * reach.length;
+    else lengthsKnown = false;
+  });
+  problems.push(...duplicateIds(reaches, 'reaches', 'reach'));
+  problems.push(...duplicateIds(Array.isArray(raw.flows) ? raw.flows : [], 'flows', 'flow'));
+
+  // controls that cannot be: a stage at or below the bed, a depth above a conduit's crown
+  const downstreamBed = typeof raw.downstreamBedElevation === 'number' ? raw.downstreamBedElevation : 0;
+  if (isRecord(raw.boundaries) && lengthsKnown && reaches.length > 0) {
+    const ends = [
+      { end: 'upstream', bed: downstreamBed + fall, reach: reaches[0] },
+      { end: 'downstream', bed: downstreamBed, reach: reaches[reaches.length - 1] },
+    ] as const;
+    for (const { end, bed, reach } of ends) {
+      const boundary = raw.boundaries[end] as BoundarySpec | undefined;
+      if (!isRecord(boundary)) continue;
+      const section = isRecord(reach) && typeof reach.section === 'string' ? sections.get(reach.section) : undefined;
+      const depth =
+        boundary.type === 'stage' && typeof boundary.elevation === 'number'
+          ? boundary.elevation - bed
+          : boundary.type === 'depth' && typeof boundary.depth === 'number'
+            ? boundary.depth
+            : undefined;
+      if (depth === undefined) continue;
+      const key = boundary.type === 'stage' ? 'elevation' : 'depth';
+      if (boundary.type === 'stage' && depth <= 0) {
+        problems.push({ where: `boundaries.${end}.elevation`, message: msg.stageBelowBed(boundary.elevation, bed, end), value: boundary.elevation });
+      } else if (section?.shape === 'circular' && depth > section.diameter) {
+        const unit = raw.units === 'US' ? 'ft' : 'm';
+        problems.push({
+          where: `boundaries.${end}.${key}`,
+          message: msg.depthAboveCrown(round(depth), section.diameter, unit),
+          value: key === 'depth' ? depth : (boundary as { elevation: number }).elevation,
+        });
+      }
+    }
+  }
+  return problems;
+}
+
+function duplicateIds(list: unknown[], path: string, what: string): Problem[] {
+  const first = new Map<string, number>();
+  const problems: Problem[] = [];
+  list.forEach((item, i) => {
+    if (!isRecord(item) || typeof item.id !== 'string') return;
+    const earlier = first.get(item.id);
+    if (earlier === undefined) first.set(item.id, i);
+    else problems.push({ where: `${path}[${i}].id`, message: msg.duplicateId(what, item.id, earlier), value: item.id });
+  });
+  return problems;
+}
+
+function round(value: number): number {
+  return Math.round(value * 1e6) / 1e6;
+}
