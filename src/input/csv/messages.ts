@@ -166,3 +166,5 @@ export const fileNotFound = (given: string, resolved: string): string =>
 
 export const notAFile = (given: string, resolved: string): string =>
   `${show(given)} resolves to ${resolved}, which is not a file`;
+
+export const unreadable = (resolved: string, reason: string): string => `cannot read ${resolved}: ${reason}`;
