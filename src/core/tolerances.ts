@@ -35,3 +35,44 @@ export const crownRoundoffFraction = 1e-12;
 /** Geometry: below this half-angle (rad) circular-segment formulas switch to their Taylor series, which
  *  avoid the cancellation of θ − sin θ at shallow depth. */
 export const segmentSeriesAngle = 1e-2;
+
+/** Hydraulics: a minimum found by Brent's minimiser is located to about √ε relative; a depth this close
+ *  (relative) to a located extremum of specific energy or specific force is treated as being at it. */
+export const extremumRelativeTolerance = 1e-6;
+/** Geometry: the largest length (offset, width, diameter, elevation magnitude) accepted, in the unit system's
+ *  length unit; beyond it the section formulas would lose precision (and squares could overflow). */
+export const largestLength = 1e7;
+/** Geometry: the largest side slope (horizontal : 1 vertical) accepted; flatter than this is a floodplain, not a bank. */
+export const largestSideSlope = 1e4;
+
+/* ---- Profile engine (src/profile) ---- */
+/** Profile: fraction of the accuracy goal each integration method aims at internally (the rest is margin). */
+export const profileAccuracySafety = 0.25;
+/** Profile: |dE/dy| below this counts as the near-critical band, where the ODE method integrates x(y) instead of y(x). */
+export const nearCriticalBand = 0.3;
+/** Profile: floor of |dE/dy| used when the ODE right-hand side is evaluated inside the near-critical band (keeps it finite). */
+export const nearCriticalFloor = 0.03;
+/** Profile: a depth within this fraction of critical depth (relative) is at critical depth. */
+export const criticalReachFraction = 1e-7;
+/** Profile: a depth within this fraction of normal depth (relative) starts a uniform stretch exactly. */
+export const normalStartFraction = 1e-9;
+/** Profile: largest number of internal steps of one stretch (any method); beyond it the method fails with a NumericalError. */
+export const profileMaxSteps = 2_000_000;
+/** Profile: largest growth of the standard step's internal step from one step to the next. */
+export const stepGrowthLimit = 2;
+/** Profile: first internal step of the standard step starting at or near critical depth, as a fraction of critical depth. */
+export const criticalStartStepFraction = 1e-3;
+/** Profile: the direct step's depth increment, as a fraction of the distance to the depth the profile tends to (first try). */
+export const directStepIncrement = 0.02;
+/** Profile: the direct step halves its increments at most this many times to meet the accuracy goal. */
+export const directStepHalvings = 8;
+/** Profile: ODE tolerances relative to the accuracy goal (default run) and for a reference run. */
+export const odeToleranceFraction = 1e-3;
+export const odeReferenceFraction = 1e-6;
+/** Profile: relative tolerance of the ODE method (default run, reference run). */
+export const odeRelativeTolerance = 1e-8;
+export const odeReferenceRelativeTolerance = 1e-11;
+/** Profile: relative step for the numerical derivative dα/dy of a compound section. */
+export const alphaDerivativeStep = 1e-6;
+/** Profile: a jump toe is located to this fraction of the channel length (Brent on the specific-force difference). */
+export const jumpToeTolerance = 1e-9;

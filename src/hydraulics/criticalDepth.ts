@@ -1,0 +1,143 @@
+/**
+ * Critical depth: the depth of minimum specific energy E(y) = y + α(y)·Q²/(2gA²) for a discharge.
+ *
+ * - Shapes whose section factor A³/T rises with depth and whose α is constant (rectangular, trapezoidal,
+ *   triangular, circular; one roughness): E has one minimum, where dE/dy = 0, i.e. the Froude condition
+ *   α·Q²·T = g·A³ (Chow 1959, §3-2, eq. 3-5 with α). Solved by Brent's method on g·A³ − α·Q²·T, which is
+ *   negative at small depth and positive above critical depth.
+ * - Irregular and compound sections: A³/T may fall where the water spills onto a floodplain, and α changes
+ *   with depth, so E may have several local minima (Blalock & Sturm 1981, "Minimum specific energy in
+ *   compound open channel", J. Hydraulics Division ASCE 107(HY6); from memory). E is scanned over the
+ *   section's depth range (core/tolerances.ts scanSamples intervals) and each sampled minimum is refined by
+ *   Brent's minimiser. A minimum narrower than one scan interval could be missed.
+ *
+ * Circular conduit near the crown: T → 0 as y → D, so A³/T → ∞ and the Froude condition has a root below
+ * the crown for every discharge; critical depth approaches the crown only as Q grows without bound.
+ * The result is always inside the conduit (at most D; a value equal to D means the root lies within the
+ * depth tolerance of the crown). Above about 0.9·D the critical depth changes fast with discharge and a
+ * small change of Q moves it a lot (see the test of this module for the computed numbers).
+ */
+import { HydraulicError, NumericalError } from '../core/errors.js';
+import { brentRoot, expandUpward } from '../core/roots.js';
+import type { Section } from '../geometry/section.js';
+import { conveyanceAndAlpha, type HydraulicSection } from './hydraulicSection.js';
+import {
+  depthTolerance,
+  extendSectionError,
+  type Extrema,
+  requireDischarge,
+  scannedExtrema,
+  smallestDepth,
+  unboundedTop,
+} from './depthSearch.js';
+import { depthTable } from './depthTable.js';
+
+/** Shapes with one critical depth for any discharge (A³/T increasing in depth). */
+const singleCriticalShapes: ReadonlySet<string> = new Set(['rectangular', 'trapezoidal', 'triangular', 'circular']);
+
+/** True when this section has exactly one critical depth (and one minimum of specific force) for any discharge. */
+export function hasSingleCriticalDepth(section: Section): boolean {
+  return !section.compound && singleCriticalShapes.has(section.shape);
+}
+
+/** α where it does not depend on depth: the user's value, or 1 for one roughness. */
+function constantAlpha(hs: HydraulicSection): number {
+  return hs.alpha ?? 1;
+}
+
+/**
+ * The depth where coefficient·Q²·T = g·A³ in a single-critical-depth shape (coefficient α for critical depth,
+ * 1 for the minimum of specific force).
+ */
+export function froudeConditionDepth(hs: HydraulicSection, discharge: number, coefficient: number, what: string): number {
+  const section = hs.section;
+  const g = hs.units.g;
+  const q2 = coefficient * discharge * discharge;
+  const residual = (y: number): number => {
+    const e = section.elements(y);
+    return g * e.area * e.area * e.area - q2 * e.topWidth;
+  };
+  const lo = smallestDepth(section);
+  let a = lo;
+  let b: number;
+  if (Number.isFinite(section.maxDepth)) {
+    b = section.maxDepth;
+    // a closed conduit has T = 0 at the crown, so the residual is positive there: always bracketed
+    if (residual(b) < 0) throw extendSectionError(section, what);
+  } else {
+    const bracket = expandUpward(residual, lo, section.lengthScale);
+    if (!bracket) throw new NumericalError(`${what}: no bracket found doubling the depth up from ${section.lengthScale}`);
+    [a, b] = bracket;
+  }
+  return brentRoot(residual, a, b, { xTolerance: depthTolerance(section, a), what });
+}
+
+/** Specific energy y + αQ²/(2gA²) without argument checks (the solvers' inner function). */
+export function energyAt(hs: HydraulicSection, y: number, discharge: number): number {
+  const e = hs.section.elements(y);
+  const alpha = hasSingleCriticalDepth(hs.section) ? constantAlpha(hs) : conveyanceAndAlpha(hs, y, discharge).alpha;
+  return y + (alpha * discharge * discharge) / (2 * hs.units.g * e.area * e.area);
+}
+
+/** The local extrema of specific energy over the section's depth range (minima are the critical depths). */
+export function specificEnergyExtrema(hs: HydraulicSection, discharge: number): Extrema {
+  const section = hs.section;
+  const what = `critical depth (Q = ${discharge})`;
+  if (hasSingleCriticalDepth(section)) {
+    const yc = froudeConditionDepth(hs, discharge, constantAlpha(hs), what);
+    return {
+      minima: [yc],
+      maxima: [],
+      tolerance: (y) => depthTolerance(section, y),
+      top: section.maxDepth,
+      fallingAtTop: false,
+    };
+  }
+  const g = hs.units.g;
+  const q2 = discharge * discharge;
+  // an unbounded compound section: scan to well above the depth where the local Froude condition is met
+  const top = Number.isFinite(section.maxDepth)
+    ? section.maxDepth
+    : unboundedTop(
+        section,
+        (y) => {
+          const e = section.elements(y);
+          return g * e.area ** 3 - conveyanceAndAlpha(hs, y, discharge).alpha * q2 * e.topWidth;
+        },
+        what,
+        4,
+      );
+  const table = depthTable(hs, top, discharge);
+  const values = new Float64Array(table.depth.length);
+  for (let i = 0; i < values.length; i++) {
+    const a = table.area[i]!;
+    values[i] = a > 0 ? table.depth[i]! + (table.alpha[i]! * q2) / (2 * g * a * a) : Infinity;
+  }
+  const extrema = scannedExtrema(section, (y) => energyAt(hs, y, discharge), table.depth, values, what);
+  if (extrema.minima.length === 0) {
+    if (Number.isFinite(section.maxDepth)) throw extendSectionError(section, what);
+    throw new HydraulicError(`${what}: specific energy has no minimum below depth ${top}`);
+  }
+  return extrema;
+}
+
+/** Every depth where specific energy has a local minimum, ascending (one for simple shapes, several possible in compound sections). */
+export function criticalDepths(hs: HydraulicSection, discharge: number): number[] {
+  requireDischarge(discharge, 'critical depth');
+  return [...specificEnergyExtrema(hs, discharge).minima];
+}
+
+/** The critical depth of least specific energy. */
+export function criticalDepth(hs: HydraulicSection, discharge: number): number {
+  const depths = criticalDepths(hs, discharge);
+  let best = depths[0]!;
+  let least = energyAt(hs, best, discharge);
+  for (const y of depths.slice(1)) {
+    const e = energyAt(hs, y, discharge);
+    if (e < least) {
+      least = e;
+      best = y;
+    }
+  }
+  return best;
+}
