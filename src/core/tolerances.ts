@@ -32,9 +32,10 @@ export function accuracyFor(system: 'SI' | 'US', depth: number): number {
 /** Geometry: a depth above a closed conduit's crown (or an irregular section's end point) by no more than
  *  this fraction of that limit is round-off and is treated as being at the limit. */
 export const crownRoundoffFraction = 1e-12;
-/** Geometry: below this half-angle (rad) circular-segment formulas switch to their Taylor series, which
- *  avoid the cancellation of θ − sin θ at shallow depth. */
-export const segmentSeriesAngle = 1e-2;
+/** Geometry: below this half-angle φ (rad) the circular-segment area and first moment are taken from their
+ *  Taylor series (to φ¹⁹, truncation < 1e-14 relative here), which avoid the cancellation of the closed forms
+ *  at shallow depth (the first moment's terms cancel to order φ⁵). */
+export const segmentSeriesAngle = 0.5;
 
 /** Hydraulics: a minimum found by Brent's minimiser is located to about √ε relative; a depth this close
  *  (relative) to a located extremum of specific energy or specific force is treated as being at it. */

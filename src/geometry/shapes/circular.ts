@@ -22,22 +22,30 @@ export interface CircularSpec {
   readonly roughness: number;
 }
 
-/** φ − sin φ·cos φ, accurate at small φ. */
+/** Taylor coefficients (in φ², from the lowest power up) of φ − sin φ·cos φ / φ³ and of (sin φ − sin³φ/3 − φ·cos φ) / φ⁵. */
+const areaSeries = [2 / 3, -2 / 15, 4 / 315, -2 / 2835, 4 / 155925, -4 / 6081075, 8 / 638512875, -2 / 10854718875, 4 / 1856156927625];
+const momentSeries = [
+  2 / 15, -11 / 315, 17 / 3780, -461 / 1247400, 8303 / 389188800, -24911 / 27243216000, 168151 / 5557616064000,
+  -1513361 / 1900704693888000,
+];
+
+function horner(coefficients: readonly number[], x: number): number {
+  let sum = 0;
+  for (let i = coefficients.length - 1; i >= 0; i--) sum = sum * x + coefficients[i]!;
+  return sum;
+}
+
+/** φ − sin φ·cos φ, accurate at small φ (the series to φ¹⁹ is exact to round-off below segmentSeriesAngle). */
 function areaFactor(phi: number): number {
-  if (phi < segmentSeriesAngle) {
-    const p2 = phi * phi;
-    // 2φ³/3 − 2φ⁵/15 + 4φ⁷/315 − 2φ⁹/2835
-    return phi * p2 * (2 / 3 + p2 * (-2 / 15 + p2 * (4 / 315 + p2 * (-2 / 2835))));
-  }
+  if (phi < segmentSeriesAngle) return phi * phi * phi * horner(areaSeries, phi * phi);
   return phi - Math.sin(phi) * Math.cos(phi);
 }
 
-/** sin φ − sin³φ/3 − φ·cos φ, accurate at small φ. */
+/** sin φ − sin³φ/3 − φ·cos φ, accurate at small φ (its terms cancel to order φ⁵). */
 function momentFactor(phi: number): number {
   if (phi < segmentSeriesAngle) {
     const p2 = phi * phi;
-    // 2φ⁵/15 − 11φ⁷/315 + 17φ⁹/3780
-    return phi * p2 * p2 * (2 / 15 + p2 * (-11 / 315 + p2 * (17 / 3780)));
+    return phi * p2 * p2 * horner(momentSeries, p2);
   }
   const s = Math.sin(phi);
   return s - (s * s * s) / 3 - phi * Math.cos(phi);
