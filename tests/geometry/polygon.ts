@@ -49,6 +49,9 @@ export function wetPockets(ground: readonly Point[], level: number): { polygon: 
       perimeter = 0;
     }
   }
+  // a line that ends under water (a piece clipped at a zone boundary): its wetted length counts; its polygon is
+  // closed along the surface only when the line ends above the water
+  if (current !== null) pockets.push({ polygon: current, perimeter });
   return pockets;
 }
 
