@@ -77,3 +77,10 @@ export const odeReferenceRelativeTolerance = 1e-11;
 export const alphaDerivativeStep = 1e-6;
 /** Profile: a jump toe is located to this fraction of the channel length (Brent on the specific-force difference). */
 export const jumpToeTolerance = 1e-9;
+
+/** Hydraulics: Colebrook–White is solved for x = 1/√f within these bounds (f from 10⁶ down to 2.5·10⁻⁵).
+ *  Where the roughness is as large as the flow (ks/(14.8R) near or above 1) the equation has no root in
+ *  range and f is held at the largest value, so a thin sheet of flow carries almost nothing. */
+export const colebrookWhiteBounds = { low: 1e-3, high: 200 } as const;
+/** Hydraulics: absolute tolerance on x = 1/√f in Colebrook–White. */
+export const colebrookWhiteTolerance = 1e-12;

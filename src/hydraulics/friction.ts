@@ -9,6 +9,7 @@
  *   Without a discharge the fully rough limit (Re → ∞) is used.
  */
 import { brentRoot } from '../core/roots.js';
+import { colebrookWhiteBounds, colebrookWhiteTolerance } from '../core/tolerances.js';
 import type { Units } from '../core/units.js';
 import type { SubsectionElements } from '../geometry/section.js';
 
@@ -22,16 +23,25 @@ export const roughnessName: Record<FrictionLaw, string> = {
   'darcy-weisbach': 'equivalent sand roughness ks',
 };
 
-/** Darcy friction factor from Colebrook–White for hydraulic radius R, roughness ks and Reynolds number Re (Infinity: fully rough). */
+/**
+ * Darcy friction factor from Colebrook–White for hydraulic radius R, roughness ks and Reynolds number Re
+ * (Infinity: fully rough). The equation has a root only while ks/(14.8R) < 1; where the roughness is as
+ * large as the flow depth the factor is held at its largest value (core/tolerances.ts colebrookWhiteBounds),
+ * so the conveyance of such a thin sheet of flow is tiny but positive. Colebrook–White describes turbulent
+ * flow; gvf applies it at every Reynolds number (no laminar branch: open channels of practical size are turbulent).
+ */
 export function colebrookWhiteFactor(hydraulicRadius: number, ks: number, reynolds: number): number {
   const relative = ks / (14.8 * hydraulicRadius);
-  if (!Number.isFinite(reynolds)) {
-    const x = -2 * Math.log10(relative);
-    return 1 / (x * x);
-  }
+  const { low, high } = colebrookWhiteBounds;
   // x = 1/√f solves x + 2·log10(relative + 2.51·x/Re) = 0; the residual is increasing in x.
-  const residual = (x: number) => x + 2 * Math.log10(relative + (2.51 * x) / reynolds);
-  const x = brentRoot(residual, 0.5, 200, { xTolerance: 1e-12, what: 'Colebrook–White friction factor' });
+  const residual = Number.isFinite(reynolds)
+    ? (x: number) => x + 2 * Math.log10(relative + (2.51 * x) / reynolds)
+    : (x: number) => x + 2 * Math.log10(relative);
+  let x: number;
+  if (residual(low) >= 0) x = low;
+  else if (residual(high) <= 0) x = high;
+  else if (!Number.isFinite(reynolds)) x = -2 * Math.log10(relative);
+  else x = brentRoot(residual, low, high, { xTolerance: colebrookWhiteTolerance, what: 'Colebrook–White friction factor' });
   return 1 / (x * x);
 }
 
