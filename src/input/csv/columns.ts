@@ -259,3 +259,28 @@ export const ratingCurveColumns = [
   },
   { key: 'discharge', label: 'discharge', aliases: ['discharge', 'q', 'flow', 'flowrate', 'rate'], quantity: 'discharge', required: true },
 ] as const satisfies readonly ColumnSpec[];
+
+export const highWaterMarkColumns = [
+  { key: 'station', label: 'station', aliases: stationNames, quantity: 'length', required: true },
+  {
+    key: 'elevation',
+    label: 'mark elevation',
+    aliases: ['elevation', 'elev', 'mark', 'markelevation', 'hwm', 'highwater', 'highwatermark', 'wsel', 'stage', 'waterlevel', 'level'],
+    quantity: 'length',
+    required: true,
+  },
+  { key: 'flow', label: 'flow id', aliases: ['flow', 'flowid', 'event', 'eventid', 'scenario'], quantity: 'text', required: true },
+  { key: 'weight', label: 'weight', aliases: ['weight', 'w', 'wt'], quantity: 'dimensionless', required: false },
+] as const satisfies readonly ColumnSpec[];
+
+export const flowTableColumns = [
+  { key: 'id', label: 'flow id', aliases: ['id', 'flowid', 'name', 'event', 'eventid', 'scenario'], quantity: 'text', required: true },
+  { key: 'discharge', label: 'discharge', aliases: ['discharge', 'q', 'flow', 'flowrate', 'rate'], quantity: 'discharge', required: true },
+  {
+    key: 'downstreamStage',
+    label: 'downstream stage',
+    aliases: ['downstreamstage', 'dsstage', 'tailwater', 'tailwaterstage', 'tailwaterelevation', 'downstreamwsel', 'stage'],
+    quantity: 'length',
+    required: false,
+  },
+] as const satisfies readonly ColumnSpec[];

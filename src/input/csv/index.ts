@@ -7,6 +7,8 @@ export {
   stationColumns,
   crossSectionColumns,
   ratingCurveColumns,
+  highWaterMarkColumns,
+  flowTableColumns,
   type ColumnSpec,
   type ColumnMap,
   type MatchedColumn,
@@ -22,6 +24,8 @@ export {
 } from './stations.js';
 export { readCrossSections, minimumPoints, type CrossSectionRows, type CrossSectionOptions } from './crossSections.js';
 export { readRatingCurve, type RatingPair } from './ratingCurve.js';
+export { readHighWaterMarks, type HighWaterMark, type MarkOptions } from './marks.js';
+export { readFlowTable, type FlowRow } from './flows.js';
 export { resolveModelPath, readModelFile } from './paths.js';
 export { problemCap } from './problems.js';
 export { largestLength, largestDischarge } from './numbers.js';

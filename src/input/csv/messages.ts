@@ -168,3 +168,13 @@ export const notAFile = (given: string, resolved: string): string =>
   `${show(given)} resolves to ${resolved}, which is not a file`;
 
 export const unreadable = (resolved: string, reason: string): string => `cannot read ${resolved}: ${reason}`;
+
+// --- high-water marks and flow tables ---------------------------------------------------------------------
+
+export const notPositive = (label: string, value: number): string => `${label} ${value} must be more than zero`;
+
+export const duplicateFlowId = (id: string, firstLine: number): string =>
+  `flow id ${show(id)} appears twice (first at line ${firstLine}); give each flow its own id`;
+
+export const unknownFlow = (id: string, known: readonly string[]): string =>
+  `flow ${show(id)} is not one of the model's flows (${known.map((k) => `"${k}"`).join(', ') || 'none'})`;
