@@ -27,7 +27,8 @@ function quoted(values: readonly string[]): string {
 /** The closest of `candidates` to `word` within a small edit distance, for "did you mean". */
 export function closest(word: string, candidates: readonly string[]): string | undefined {
   let best: string | undefined;
-  let bestDistance = Math.max(2, Math.floor(word.length / 3)) + 1;
+  // one edit in a short word, a third of the letters in a long one
+  let bestDistance = Math.max(1, Math.floor(word.length / 3)) + 1;
   for (const c of candidates) {
     const d = editDistance(word.toLowerCase(), c.toLowerCase());
     if (d < bestDistance) {
@@ -108,20 +109,14 @@ export const manningOutOfRange = (n: unknown, forceHint: string): string =>
 export const alphaOutOfRange = (alpha: unknown): string =>
   `α must lie between ${alphaRange.min} and ${alphaRange.max} (it is 1 for uniform velocity), got ${describeValue(alpha)}`;
 
-export const noRoughness = (keys: readonly string[]): string =>
-  `a roughness is required: give one of ${keys.join(', ')} (Manning's n, Chézy C, or sand roughness ks)`;
+export const noRoughness = (names: readonly string[]): string =>
+  `a roughness is required: give ${names.slice(0, -1).join(', ')} or ${names[names.length - 1]} (Manning's n, Chézy C, or sand roughness ks)`;
 
 export const severalRoughness = (keys: readonly string[]): string =>
   `give one roughness, not ${keys.join(' and ')}`;
 
 export const frictionMismatch = (friction: string, key: string, given: string): string =>
-  `the friction law "${friction}" takes its roughness from "${key}", but "${given}" was given`;
-
-export const roughnessTableOnlyForPoints = (): string =>
-  'a roughness table [[fromStation, value], ...] is only for "points" sections; give one number';
-
-export const roughnessTableStart = (first: number, sectionStart: number): string =>
-  `the first roughness station ${first} lies beyond the section's first point at ${sectionStart}; the table must cover the whole section`;
+  `the friction law "${friction}" takes its roughness from ${key}, but ${given} was given`;
 
 export const roughnessTableOrder = (previous: number, got: number): string =>
   `roughness stations must increase across the section: ${got} follows ${previous}`;

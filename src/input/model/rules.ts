@@ -17,6 +17,8 @@ export interface RuleOptions {
   readonly force?: boolean;
   /** how to tell the user to lift them ("pass --force ...") */
   readonly forceHint: string;
+  /** how a key is named in a message (a flag for the CLI); default the key itself */
+  readonly nameOf?: (key: string) => string;
 }
 
 const roughnessKeys: readonly RoughnessKey[] = ['n', 'chezy', 'ks'];
@@ -41,15 +43,16 @@ export function resolveRoughness(spec: SectionSpec): ResolvedRoughness | undefin
 
 export function sectionProblems(spec: SectionSpec, whereOf: WhereOf, options: RuleOptions): Problem[] {
   const problems: Problem[] = [];
+  const nameOf = options.nameOf ?? ((key: string) => key);
   const given = roughnessKeys.filter((k) => spec[k] !== undefined);
   if (given.length === 0) {
-    problems.push({ where: whereOf('n'), message: msg.noRoughness(roughnessKeys) });
+    problems.push({ where: whereOf('n'), message: msg.noRoughness(roughnessKeys.map(nameOf)) });
   } else if (given.length > 1) {
-    problems.push({ where: whereOf(given[1]!), message: msg.severalRoughness(given), value: spec[given[1]!] });
+    problems.push({ where: whereOf(given[1]!), message: msg.severalRoughness(given.map(nameOf)), value: spec[given[1]!] });
   } else if (spec.friction !== undefined && roughnessKey[spec.friction] !== given[0]) {
     problems.push({
       where: whereOf('friction'),
-      message: msg.frictionMismatch(spec.friction, roughnessKey[spec.friction], given[0]!),
+      message: msg.frictionMismatch(spec.friction, nameOf(roughnessKey[spec.friction]), nameOf(given[0]!)),
       value: spec.friction,
     });
   }
@@ -75,7 +78,7 @@ export function sectionProblems(spec: SectionSpec, whereOf: WhereOf, options: Ru
   if (spec.shape === 'points' && problems.length === 0) {
     for (const key of roughnessKeys) {
       const table = spec[key];
-      if (Array.isArray(table)) problems.push(...tableProblems(table, spec.points, `${whereOf(key)}`));
+      if (Array.isArray(table)) problems.push(...tableProblems(table, whereOf(key)));
     }
   }
   return problems;
@@ -101,11 +104,9 @@ function pointsProblems(points: ReadonlyArray<readonly [number, number]>, whereO
   return [];
 }
 
-function tableProblems(table: RoughnessTable, points: ReadonlyArray<readonly [number, number]>, where: string): Problem[] {
+function tableProblems(table: RoughnessTable, where: string): Problem[] {
+  // the first entry also covers any ground left of it (as the geometry defines), so only the order is checked
   const problems: Problem[] = [];
-  const start = points[0]![0];
-  const first = table[0]![0];
-  if (first > start) problems.push({ where: `${where}[0][0]`, message: msg.roughnessTableStart(first, start), value: first });
   for (let i = 1; i < table.length; i++) {
     const previous = table[i - 1]![0];
     const station = table[i]![0];
