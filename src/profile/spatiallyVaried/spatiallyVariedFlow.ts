@@ -13,7 +13,7 @@
  *      or find the control drowned
  *   6. tabulate the stations
  */
-import { InputError, type Problem } from '../../core/errors.js';
+import { InputError, NumericalError, type Problem } from '../../core/errors.js';
 import { brentRoot } from '../../core/roots.js';
 import type { JumpType } from '../../results/types.js';
 import { lateralCriticalDepth, momentumFunction, spatiallyVariedTerms } from './equation.js';
@@ -117,7 +117,7 @@ function depthOnBranch(reach: SpatiallyVariedReach, points: readonly BranchPoint
     const usable = branch === 'supercritical' ? p.x <= x : p.x >= x;
     if (usable && (from === undefined || Math.abs(p.x - x) < Math.abs(from.x - x))) from = p;
   }
-  if (from === undefined) throw new InputError({ where: 'jump', message: `no ${branch} point to start from near station ${x}` });
+  if (from === undefined) throw new NumericalError(`no computed ${branch} point to start from near station ${x}`);
   if (from.x === x) return from.y;
   return integrateBranch(reach, from, x, branch, [x]).end.y;
 }
@@ -261,7 +261,8 @@ export function spatiallyVariedFlow(input: SpatiallyVariedInput): SpatiallyVarie
         );
       } else {
         const sub = integrateBranch(reach, { x: length, y: tail }, sup.from, 'subcritical', stations);
-        const subPoints = sub.points;
+        // the last accepted point too, so a branch that stopped short of a station can still bracket the jump
+        const subPoints = sub.stopped ? [...sub.points, sub.end] : sub.points;
         const difference = (x: number): number => {
           const q = layout.discharge(x);
           return (
