@@ -61,6 +61,8 @@ export const normalStartFraction = 1e-9;
 export const profileMaxSteps = 2_000_000;
 /** Profile: largest growth of the standard step's internal step from one step to the next. */
 export const stepGrowthLimit = 2;
+/** Profile: first internal step of the standard step, as a fraction of the stretch length. */
+export const firstStepFraction = 1e-4;
 /** Profile: first internal step of the standard step starting at or near critical depth, as a fraction of critical depth. */
 export const criticalStartStepFraction = 1e-3;
 /** Profile: the direct step's depth increment, as a fraction of the distance to the depth the profile tends to (first try). */

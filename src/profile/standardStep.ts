@@ -1,0 +1,193 @@
+/**
+ * Standard step method (Chow 1959, §10-3 "standard-step method"; Henderson 1966, §4.4): the energy
+ * equation between two stations,
+ *   z2 + y2 + α2V2²/2g = z1 + y1 + α1V1²/2g − S̄f·(x2 − x1),
+ * solved for the unknown depth y2 at each step by Brent's method on the energy residual, bracketed on the
+ * branch of the flow (subcritical: [yc, top], supercritical: (0, yc]). On that branch the residual is
+ * monotone in y2, so the bracket holds at most one root; when it holds none the flow reaches critical
+ * depth within the step, and the step is shortened to end exactly there.
+ *
+ * Accuracy: the method is second order (it is the trapezoidal rule applied to dH/dx = −Sf). The local
+ * depth error of a step of length h is about h³·|Sf''|/(12·|dE/dy|); the step length is chosen from that
+ * estimate (with Sf'' from the last three stations) so the accumulated error stays within a fraction
+ * (profileAccuracySafety) of the stretch's tolerance, and a step whose estimate exceeds twice its share is
+ * redone at half length. Output stations are always computed stations (no interpolation).
+ */
+import { NumericalError } from '../core/errors.js';
+import { brentRoot } from '../core/roots.js';
+import {
+  criticalStartStepFraction,
+  firstStepFraction,
+  nearCriticalBand,
+  nearCriticalFloor,
+  profileAccuracySafety,
+  profileMaxSteps,
+  stepGrowthLimit,
+} from '../core/tolerances.js';
+import type { PointState } from './energy.js';
+import { meanFrictionSlope } from './frictionMean.js';
+import {
+  type StretchProfile,
+  type StretchSpec,
+  type StretchStop,
+  ceilingDepth,
+  depthTrend,
+  directionOf,
+  floorDepth,
+  stateAt,
+  uniformStretch,
+} from './stretch.js';
+
+interface StepOutcome {
+  state?: PointState;
+  stop?: StretchStop;
+}
+
+/** Solve the energy equation from (x1, s1) to station x2. Exported for the surveyed-reach step and tests. */
+export function energyStep(spec: StretchSpec, x1: number, s1: PointState, x2: number, guess?: number): StepOutcome {
+  const q = spec.discharge;
+  const delta = x2 - x1;
+  const yc = spec.criticalDepth;
+  const residualOf = (s: PointState) =>
+    s.energy - s1.energy - spec.slope * delta + meanFrictionSlope(spec.averaging, s1, s, q) * delta;
+  // the last state evaluated is kept: Brent ends on it, which saves one evaluation per step
+  let last: PointState | undefined;
+  const residual = (y: number) => {
+    last = stateAt(spec, y);
+    return residualOf(last);
+  };
+  const solved = (y: number): StepOutcome => ({ state: last !== undefined && last.depth === y ? last : stateAt(spec, y) });
+  const xTolerance = spec.tolerance * 1e-5;
+  const subcritical = spec.regime === 'subcritical';
+  const branchLow = subcritical ? yc : floorDepth(spec);
+  const branchHigh = subcritical ? ceilingDepth(spec) : yc;
+
+  // Where the bracket at the branch's critical end fails, the profile reaches the limit within the step:
+  // with the end depth fixed there, the residual is linear in the step length, so solve for it.
+  const limitStop = (limit: PointState, reason: 'critical' | 'full'): StepOutcome => {
+    const sf = meanFrictionSlope(spec.averaging, s1, limit, q);
+    const denominator = sf - spec.slope;
+    let d = denominator !== 0 ? (s1.energy - limit.energy) / denominator : 0;
+    if (!(d / delta >= 0)) d = 0;
+    if (d / delta > 1) d = delta;
+    return { stop: { station: x1 + d, depth: limit.depth, reason } };
+  };
+
+  // A narrow bracket around the predicted depth saves iterations; fall back to the whole branch.
+  if (guess !== undefined && guess > branchLow && guess < branchHigh) {
+    const w = Math.max(0.25 * Math.abs(guess - s1.depth), xTolerance * 100);
+    const a = Math.max(branchLow, guess - w);
+    const b = Math.min(branchHigh, guess + w);
+    // brentRoot checks the bracket itself (and throws when it holds no sign change): no separate evaluations
+    try {
+      return solved(brentRoot(residual, a, b, { xTolerance, what: `standard step depth at station ${x2}` }));
+    } catch (error) {
+      if (!(error instanceof NumericalError)) throw error;
+    }
+  }
+  const critical = stateAt(spec, yc);
+  const rc = residualOf(critical);
+  if (rc > 0) return limitStop(critical, 'critical');
+  if (rc === 0) return { state: critical };
+
+  let lo: number;
+  let hi: number;
+  if (spec.regime === 'subcritical') {
+    lo = yc;
+    const top = ceilingDepth(spec);
+    if (Number.isFinite(top)) {
+      const ceiling = stateAt(spec, top);
+      if (residualOf(ceiling) < 0) return limitStop(ceiling, 'full');
+      hi = top;
+    } else {
+      hi = Math.max(s1.depth, yc) * 1.25;
+      let expansions = 0;
+      while (residual(hi) < 0) {
+        hi *= 2;
+        if (++expansions > 60) throw new NumericalError(`standard step: no subcritical depth found up to ${hi} at station ${x2}`);
+      }
+    }
+  } else {
+    lo = floorDepth(spec);
+    hi = yc;
+  }
+
+  const y = brentRoot(residual, lo, hi, { xTolerance, what: `standard step depth at station ${x2}` });
+  return solved(y);
+}
+
+/** Estimated local depth error of the step ending at (x3, s3), from Sf at three stations. */
+function localError(x1: number, sf1: number, x2: number, sf2: number, x3: number, s3: PointState): number {
+  const h = Math.abs(x3 - x2);
+  const second = (2 * ((s3.frictionSlope - sf2) / (x3 - x2) - (sf2 - sf1) / (x2 - x1))) / (x3 - x1);
+  const d = Math.max(Math.abs(s3.dEdy), nearCriticalFloor * 1e-3);
+  return (h * h * h * Math.abs(second)) / (12 * d);
+}
+
+export function standardStep(spec: StretchSpec): StretchProfile {
+  const uniform = uniformStretch(spec);
+  if (uniform) return uniform;
+  const stations = spec.stations;
+  const direction = directionOf(spec);
+  const first = stations[0]!;
+  const length = Math.abs(stations[stations.length - 1]! - first);
+  let state = stateAt(spec, spec.startDepth);
+  const depths = [state.depth];
+  if (length === 0) return { depths: stations.map(() => state.depth), steps: 0 };
+
+  const allowedPerLength = (spec.tolerance * profileAccuracySafety) / length;
+  const smallest = length * 1e-12;
+  let x = first;
+  // the first step has no error estimate (that needs three stations): start short and let the estimate grow it
+  let h = length * firstStepFraction;
+  if (Math.abs(state.dEdy) < nearCriticalBand) h = Math.min(h, criticalStartStepFraction * spec.criticalDepth);
+  // the previous accepted station (with the current one and the new one: Sf'') and the predictor's history
+  let xb = NaN;
+  let sfb = NaN;
+  let yPrevious = NaN;
+  let xPrevious = NaN;
+  let steps = 0;
+
+  for (let i = 1; i < stations.length; i++) {
+    const target = stations[i]!;
+    while (direction * (target - x) > 0) {
+      const remaining = direction * (target - x);
+      let dx = h;
+      if (remaining <= dx * 1.05) dx = remaining;
+      const x2 = remaining === dx ? target : x + direction * dx;
+      let guess: number;
+      if (Number.isFinite(yPrevious)) guess = state.depth + ((state.depth - yPrevious) * (x2 - x)) / (x - xPrevious);
+      else {
+        const trend = depthTrend(spec, state);
+        const g = Math.abs(state.dEdy) > nearCriticalBand ? (spec.slope - state.frictionSlope) / state.dEdy : NaN;
+        guess = Number.isFinite(g) ? state.depth + g * (x2 - x) : state.depth + trend * 1e-3 * spec.criticalDepth;
+      }
+      const outcome = energyStep(spec, x, state, x2, guess);
+      if (outcome.stop) return { depths, stop: outcome.stop, steps: steps + 1 };
+      const next = outcome.state!;
+      let factor = stepGrowthLimit;
+      if (Number.isFinite(xb)) {
+        const e = localError(xb, sfb, x, state.frictionSlope, x2, next);
+        const allowed = allowedPerLength * dx;
+        if (e > 2 * allowed && dx > smallest * 2) {
+          h = dx / 2;
+          continue;
+        }
+        factor = e > 0 ? Math.min(stepGrowthLimit, Math.max(0.2, 0.9 * Math.sqrt(allowed / e))) : stepGrowthLimit;
+      }
+      xb = x;
+      sfb = state.frictionSlope;
+      yPrevious = state.depth;
+      xPrevious = x;
+      x = x2;
+      state = next;
+      // a step shortened to land on a station does not shrink the next one
+      h = Math.max(smallest, (remaining === dx ? Math.max(h, dx) : dx) * factor);
+      if (++steps > profileMaxSteps) {
+        throw new NumericalError(`standard step: more than ${profileMaxSteps} steps between stations ${first} and ${target}`);
+      }
+    }
+    depths.push(state.depth);
+  }
+  return { depths, steps };
+}
