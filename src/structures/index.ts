@@ -1,4 +1,19 @@
-/** Structures: weirs, gates, culverts, drops, spillways and rating curves as controls of the profile. */
+/**
+ * Structures: weirs, gates, culverts, drops, spillways and rating curves as controls of the profile.
+ *
+ * For the profile engine: every structure is a pure function
+ *   (spec, discharge, tailwaterStage | null, units[, …]) → StructureOutcome
+ * (types.ts). Compute the subcritical profile downstream of the structure first (or take the downstream
+ * boundary), pass its stage just below the structure as tailwaterStage, then
+ *   - start the upstream subcritical profile from outcome.headwaterStage (energy: outcome.headwaterEnergy);
+ *   - where outcome.downstreamSupercriticalDepth is not null (free gate, spillway toe, steep culvert
+ *     outlet), start a supercritical profile downstream from that depth and place the jump by specific force.
+ * Weirs and spillways take an optional approachArea(stage) (the engine's upstream section) to split the
+ * approach velocity head. culvert() takes options.barrelProfile, the engine's part-full barrel profile
+ * (culvert/outletControl.ts: BarrelProfileInputs → BarrelProfileResult), injected so structures need not
+ * import the engine. freeOverfall() takes the critical depth the engine already has. toStructureResult()
+ * turns an outcome into the results layer's StructureResult (caution kept as the last note).
+ */
 export * from './types.js';
 export * from './cautions.js';
 export * from './invert.js';
