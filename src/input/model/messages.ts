@@ -133,7 +133,9 @@ export const pointsNoLowPoint = (): string =>
 // ---- reaches, flows, boundaries ----------------------------------------------------------------------
 
 export const noSuchSection = (name: unknown, known: readonly string[]): string =>
-  `no section named ${describeValue(name)}${typeof name === 'string' ? suggestion(name, known) : ''}; the sections defined are ${quoted(known)}`;
+  known.length === 0
+    ? `no section named ${describeValue(name)}; the model defines no sections`
+    : `no section named ${describeValue(name)}${typeof name === 'string' ? suggestion(name, known) : ''}; the sections defined are ${quoted(known)}`;
 
 export const duplicateId = (what: string, id: string, firstIndex: number): string =>
   `the ${what} id ${JSON.stringify(id)} is used twice (first at index ${firstIndex}); ids must be unique`;
