@@ -13,8 +13,8 @@
  *    one-dimensional river models):
  *    - corresponding points: the two end points, the roughness-zone boundaries (bank stations) when both
  *      sections have the same number of zones, and the inverts when both lie between the same pair of
- *      those; between them, points correspond by their fraction of the ground-line length (so vertical
- *      walls are handled like any other segment);
+ *      those; between them, points correspond by their fraction of the offset (normalised offset); a vertical
+ *      wall in one section stands against a single point of the other;
  *    - every point of either section is kept (the union of both sets of fractions), so each end section is
  *      reproduced exactly at t = 0 and t = 1;
  *    - offsets and elevations relative to each invert are blended linearly, and the invert elevation too
@@ -25,7 +25,7 @@
 import { HydraulicError, InputError, show } from '../core/errors.js';
 import type { Section } from './section.js';
 import { circular } from './shapes/circular.js';
-import { isPointsSection, type PointsSection, points, roughnessZones, type StationElevation } from './shapes/points.js';
+import { isPointsSection, type PointsSection, points, type RoughnessZone, type StationElevation } from './shapes/points.js';
 import { rectangular } from './shapes/rectangular.js';
 import { trapezoidal } from './shapes/trapezoidal.js';
 import { triangular } from './shapes/triangular.js';
@@ -35,7 +35,8 @@ export interface BlendOptions {
   readonly invertElevation?: number;
 }
 
-const lerp = (a: number, b: number, t: number): number => a + (b - a) * t;
+// (1 − t)·a + t·b is exact at both ends; equal values stay equal (so equal roughness zones merge)
+const lerp = (a: number, b: number, t: number): number => (a === b ? a : (1 - t) * a + t * b);
 
 interface Trapezoid {
   readonly b: number;
@@ -86,25 +87,18 @@ export function prismaticAsPoints(section: Section, height: number, centre = 0, 
 interface Line {
   readonly xs: number[];
   readonly zs: number[];
-  /** zone value of segment j (between vertex j and j + 1) */
-  readonly segValue: number[];
-  /** ξ of each vertex: anchor index + fraction of ground length to the next anchor */
+  readonly zones: readonly RoughnessZone[];
+  /** ξ of each vertex: anchor index + fraction of offset to the next anchor (non-decreasing; equal on a wall) */
   xi: number[];
   readonly invert: number;
   /** vertex index of the first lowest point */
   readonly invertIndex: number;
-  /** vertex indices of the zone boundaries */
+  /** vertex indices of the zone boundaries (the first vertex at each boundary offset) */
   readonly boundaries: number[];
 }
 
 function lineOf(s: PointsSection): Line {
-  const first = s.points[0]!;
-  const last = s.points[s.points.length - 1]!;
-  const zones = roughnessZones(
-    s.zones.length === 1 ? s.zones[0]!.value : s.zones.map((z) => [z.from, z.value] as const),
-    first[0],
-    last[0],
-  );
+  const zones = s.zones;
   const xs: number[] = [];
   const zs: number[] = [];
   const boundaries: number[] = [];
@@ -121,67 +115,63 @@ function lineOf(s: PointsSection): Line {
       const [xp, zp] = s.points[i - 1]!;
       while (next < zones.length && zones[next]!.from < x) {
         const b = zones[next]!.from;
-        push(b, xp === x ? zp : zp + ((z - zp) * (b - xp)) / (x - xp));
+        push(b, zp + ((z - zp) * (b - xp)) / (x - xp));
         boundaries.push(xs.length - 1);
         next++;
       }
     }
     push(x, z);
-    // a boundary exactly at this vertex's offset: the first vertex there
     while (next < zones.length && zones[next]!.from === x) {
       boundaries.push(xs.length - 1);
       next++;
     }
   }
-  const segValue: number[] = [];
-  for (let j = 0; j + 1 < xs.length; j++) {
-    const mid = 0.5 * (xs[j]! + xs[j + 1]!);
-    let k = 0;
-    for (let i = 1; i < zones.length; i++) if (zones[i]!.from <= mid) k = i;
-    segValue.push(zones[k]!.value);
-  }
   let invertIndex = 0;
   for (let i = 1; i < zs.length; i++) if (zs[i]! < zs[invertIndex]!) invertIndex = i;
-  return { xs, zs, segValue, xi: [], invert: zs[invertIndex]!, invertIndex, boundaries };
+  return { xs, zs, zones, xi: [], invert: zs[invertIndex]!, invertIndex, boundaries };
 }
 
 /** Set ξ for each vertex from the anchor vertex indices (strictly increasing, first 0, last the end). */
 function setPositions(line: Line, anchors: number[]): void {
-  const cum = [0];
-  for (let j = 0; j + 1 < line.xs.length; j++) {
-    cum.push(cum[j]! + Math.hypot(line.xs[j + 1]! - line.xs[j]!, line.zs[j + 1]! - line.zs[j]!));
-  }
   const xi: number[] = new Array(line.xs.length);
   for (let a = 0; a + 1 < anchors.length; a++) {
     const i0 = anchors[a]!;
     const i1 = anchors[a + 1]!;
-    const span = cum[i1]! - cum[i0]!;
-    for (let i = i0; i <= i1; i++) xi[i] = a + (span > 0 ? (cum[i]! - cum[i0]!) / span : (i - i0) / (i1 - i0));
+    const span = line.xs[i1]! - line.xs[i0]!;
+    // between anchors at one offset (a wall) the vertices are spread by their order
+    for (let i = i0; i <= i1; i++) xi[i] = a + (span > 0 ? (line.xs[i]! - line.xs[i0]!) / span : (i - i0) / (i1 - i0));
   }
   line.xi = xi;
 }
 
-/** Index of the segment holding ξ (the last vertex with ξ ≤ the value, not the end vertex). */
-function segmentAt(line: Line, xi: number): number {
+/** The vertices of a line at ξ: its own vertices there (several on a wall), else one point interpolated on its segment. */
+function verticesAt(line: Line, xi: number): { x: number; z: number[] } {
   let lo = 0;
-  let hi = line.xi.length - 2;
+  let hi = line.xi.length - 1;
   while (lo < hi) {
-    const mid = (lo + hi + 1) >> 1;
-    if (line.xi[mid]! <= xi) lo = mid;
-    else hi = mid - 1;
+    const mid = (lo + hi) >> 1;
+    if (line.xi[mid]! < xi) lo = mid + 1;
+    else hi = mid;
   }
-  return lo;
+  // lo: the first vertex with ξ ≥ xi
+  if (line.xi[lo] === xi) {
+    const z: number[] = [];
+    for (let i = lo; i < line.xi.length && line.xi[i] === xi; i++) z.push(line.zs[i]! - line.invert);
+    return { x: line.xs[lo]!, z };
+  }
+  const j = lo - 1;
+  const f = (xi - line.xi[j]!) / (line.xi[lo]! - line.xi[j]!);
+  return { x: lerp(line.xs[j]!, line.xs[lo]!, f), z: [lerp(line.zs[j]!, line.zs[lo]!, f) - line.invert] };
 }
 
-function pointAt(line: Line, xi: number): [number, number] {
-  const j = segmentAt(line, xi);
-  const x0 = line.xi[j]!;
-  const x1 = line.xi[j + 1]!;
-  const f = x1 > x0 ? Math.min(1, Math.max(0, (xi - x0) / (x1 - x0))) : 0;
-  return [lerp(line.xs[j]!, line.xs[j + 1]!, f), lerp(line.zs[j]!, line.zs[j + 1]!, f) - line.invert];
+/** The roughness of a line's zone holding offset x (a boundary belongs to the zone starting there). */
+function roughnessAt(line: Line, x: number): number {
+  let k = 0;
+  for (let i = 1; i < line.zones.length; i++) if (line.zones[i]!.from <= x) k = i;
+  return line.zones[k]!.value;
 }
 
-/** Where along the anchors a vertex index lies: the anchor interval a with anchors[a] < i < anchors[a+1], or −1 on an anchor. */
+/** Where a vertex index lies among the anchors: a with anchors[a] < i < anchors[a+1], or −1 on an anchor. */
 function anchorInterval(anchors: number[], i: number): number {
   for (let a = 0; a + 1 < anchors.length; a++) {
     if (i === anchors[a] || i === anchors[a + 1]) return -1;
@@ -210,31 +200,42 @@ function blendPoints(up: PointsSection, down: PointsSection, t: number, options:
   setPositions(l2, a2);
 
   const xis = [...new Set([...l1.xi, ...l2.xi])].sort((p, q) => p - q);
-  const invert = options.invertElevation ?? lerp(l1.invert, l2.invert, t);
   const pts: [number, number][] = [];
+  const offsets: number[] = [];
   for (const xi of xis) {
-    const [x1, z1] = pointAt(l1, xi);
-    const [x2, z2] = pointAt(l2, xi);
-    pts.push([lerp(x1, x2, t), lerp(z1, z2, t)]);
+    const v1 = verticesAt(l1, xi);
+    const v2 = verticesAt(l2, xi);
+    const x = lerp(v1.x, v2.x, t);
+    offsets.push(x);
+    // a wall in one section and not the other: the single point stands against each point of the wall
+    const count = Math.max(v1.z.length, v2.z.length);
+    for (let i = 0; i < count; i++) {
+      pts.push([x, lerp(v1.z[Math.min(i, v1.z.length - 1)]!, v2.z[Math.min(i, v2.z.length - 1)]!, t)]);
+    }
   }
+  // offsets must stay non-decreasing: a blend of two non-decreasing functions of ξ is, but guard round-off
+  for (let i = 1; i < pts.length; i++) if (pts[i]![0] < pts[i - 1]![0]) pts[i]![0] = pts[i - 1]![0];
   // place the lowest blended point at the invert (it is there already when the inverts correspond)
+  const invert = options.invertElevation ?? lerp(l1.invert, l2.invert, t);
   let lowest = Infinity;
   for (const p of pts) lowest = Math.min(lowest, p[1]);
   for (const p of pts) p[1] = p[1] - lowest + invert;
-  // offsets must stay non-decreasing: a blend of two non-decreasing functions of ξ is, but guard round-off
-  for (let i = 1; i < pts.length; i++) if (pts[i]![0] < pts[i - 1]![0]) pts[i]![0] = pts[i - 1]![0];
 
+  // roughness: constant where both sections' zones are; the pieces start at either section's zone boundaries
+  const starts = [...new Set([0, ...l1.boundaries.map((i) => l1.xi[i]!), ...l2.boundaries.map((i) => l2.xi[i]!)])].sort(
+    (p, q) => p - q,
+  );
+  const end = xis[xis.length - 1]!;
   const zones: [number, number][] = [];
-  for (let u = 0; u + 1 < xis.length; u++) {
-    const mid = 0.5 * (xis[u]! + xis[u + 1]!);
-    const value = lerp(l1.segValue[segmentAt(l1, mid)]!, l2.segValue[segmentAt(l2, mid)]!, t);
+  for (let k = 0; k < starts.length; k++) {
+    const from = starts[k]!;
+    const to = starts[k + 1] ?? end;
+    const mid = 0.5 * (from + to);
+    const value = lerp(roughnessAt(l1, verticesAt(l1, mid).x), roughnessAt(l2, verticesAt(l2, mid).x), t);
+    const x = lerp(verticesAt(l1, from).x, verticesAt(l2, from).x, t);
     const last = zones[zones.length - 1];
-    if (last === undefined) zones.push([pts[0]![0], value]);
-    else if (last[1] !== value) {
-      // a change of value at a vertical wall's offset: the zone before it has no width, so replace it
-      if (pts[u]![0] > last[0]) zones.push([pts[u]![0], value]);
-      else last[1] = value;
-    }
+    if (last === undefined || x > last[0]) zones.push([x, value]);
+    else last[1] = value; // a piece of no width
   }
   return points({ points: pts, roughness: zones.length === 1 ? zones[0]![1] : zones });
 }

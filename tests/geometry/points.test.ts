@@ -37,7 +37,7 @@ const groundLine = fc
       const top = Math.max(...inner.map(([, z]) => z));
       pts.push([x, top + hl]);
       for (const [dx, z, makeWall] of inner) {
-        const isWall = makeWall && !wall && dx < 2;
+        const isWall: boolean = makeWall && !wall && dx < 2;
         x += isWall ? 0 : dx + 0.01;
         wall = isWall;
         pts.push([x, z]);
