@@ -69,6 +69,14 @@ describe('renderChart(spec)', () => {
     expect(() => checkedSvg(out.svg)).not.toThrow();
   });
 
+  it('renderChart(profileChart(run)) keeps the plot the same size under a very long title (the title is cut, not the plot)', async () => {
+    const frame = (svg: string) => /class="background"[^>]*d="M[^h]*h([\d.]+)v([\d.]+)/.exec(svg)!.slice(1).map(Number);
+    const short = await renderChart(profileChart(twoReachRun('short')), { png: false });
+    const long = await renderChart(profileChart(twoReachRun('x'.repeat(200))), { png: false });
+    expect(frame(long.svg)).toEqual(frame(short.svg));
+    expect(frame(short.svg)[0]).toBeGreaterThan(700);
+  });
+
   it('svgToPng(svg, scale) refuses a scale outside (0, 16]', async () => {
     await expect(svgToPng('<svg xmlns="http://www.w3.org/2000/svg" width="2" height="2"/>', 0)).rejects.toThrow(/scale/);
     await expect(svgToPng('<svg xmlns="http://www.w3.org/2000/svg" width="2" height="2"/>', Number.NaN)).rejects.toThrow(/scale/);

@@ -354,7 +354,7 @@ export function profileChart(run: RunResult, options: ProfileChartOptions = {}):
   const spec = {
     $schema: 'https://vega.github.io/schema/vega-lite/v6.json',
     description: 'gvf longitudinal profile',
-    title: { text: title, subtitle: `Units ${run.units}; method ${run.method}; flows ${flows.map((f) => f.id).join(', ')}` },
+    title: { text: title, limit: width - 10, subtitle: `Units ${run.units}; method ${run.method}; flows ${flows.map((f) => f.id).join(', ')}` },
     width,
     height,
     autosize: { type: 'fit', contains: 'padding' },

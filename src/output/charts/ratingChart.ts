@@ -67,7 +67,7 @@ export function ratingChart(input: RatingChartInput): TopLevelSpec {
   const spec = {
     $schema: 'https://vega.github.io/schema/vega-lite/v6.json',
     description: 'gvf rating curve',
-    title: { text: input.title ?? words.ratingTitle, subtitle: 'Stage against discharge' },
+    title: { text: input.title ?? words.ratingTitle, limit: width - 10, subtitle: 'Stage against discharge' },
     width,
     height,
     autosize: { type: 'fit', contains: 'padding' },

@@ -197,7 +197,7 @@ export function sectionChart(input: SectionChartInput): TopLevelSpec {
   const spec = {
     $schema: 'https://vega.github.io/schema/vega-lite/v6.json',
     description: 'gvf cross-section',
-    title: { text: title, subtitle: levels.map((w) => `${w.flow}: water surface ${w.wsel.toFixed(3)} ${u}`).join('; ') || ' ' },
+    title: { text: title, limit: width - 10, subtitle: levels.map((w) => `${w.flow}: water surface ${w.wsel.toFixed(3)} ${u}`).join('; ') || ' ' },
     width,
     height,
     autosize: { type: 'fit', contains: 'padding' },

@@ -41,6 +41,7 @@ h2 { font-size: 19px; border-bottom: 2px solid var(--accent); padding-bottom: 3p
 h2 .num { color: var(--accent); margin-right: 8px; }
 h3 { font-size: 15px; margin: 18px 0 8px; }
 h4 { font-size: 13px; margin: 12px 0 6px; color: var(--muted); text-transform: uppercase; letter-spacing: .04em; }
+h5.item { font-size: 13px; margin: 10px 0 4px; }
 p { margin: 6px 0; }
 .caution-strip { margin: 16px 0 0; padding: 10px 14px; border: 1px solid #e3b5ad; border-left: 5px solid var(--warn);
   background: var(--warn-wash); font-size: 13px; }
@@ -77,7 +78,7 @@ footer { padding: 12px 32px 24px; font-size: 12px; color: var(--muted); border-t
   header.band { -webkit-print-color-adjust: exact; print-color-adjust: exact; padding: 12px 14px; }
   main, footer { padding-left: 0; padding-right: 0; }
   nav.toc { display: none; }
-  h2, h3, h4 { break-after: avoid; page-break-after: avoid; }
+  h2, h3, h4, h5 { break-after: avoid; page-break-after: avoid; }
   figure.chart, .card, .cautions, .caution-strip, tr { break-inside: avoid; page-break-inside: avoid; }
   thead { display: table-header-group; }
   section.part.stations { break-before: page; page-break-before: always; }

@@ -139,7 +139,7 @@ function freeboardFailures(flow: FlowResult): FreeboardRow[] {
 function structureBlock(s: StructureResult, u: string): string {
   const rows = Object.entries(s.values).map(([k, v]) => [h(k), h(valueText(v))]);
   const notes = s.notes.length ? `<ul class="plain">${s.notes.map((n) => `<li>${h(n)}</li>`).join('')}</ul>` : '';
-  return `<h4>${h(s.id)}: ${h(s.type)} at station ${num(s.station, 2)} ${h(u)}</h4>${table(['Quantity', 'Value'], rows)}${notes}`;
+  return `<h5 class="item">${h(s.id)}: ${h(s.type)} at station ${num(s.station, 2)} ${h(u)}</h5>${table(['Quantity', 'Value'], rows)}${notes}`;
 }
 
 function flowSummary(run: RunResult, flow: FlowResult, index: number, controls: readonly ReportControl[]): string {
