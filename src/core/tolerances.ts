@@ -86,3 +86,7 @@ export const jumpToeTolerance = 1e-9;
 export const colebrookWhiteBounds = { low: 1e-3, high: 200 } as const;
 /** Hydraulics: absolute tolerance on x = 1/√f in Colebrook–White. */
 export const colebrookWhiteTolerance = 1e-12;
+/** Hydraulics: a bracketed sign change of Q − K(y)·√S0 whose residual at the converged depth is still above
+ *  this fraction of Q is a jump of conveyance (the wetted perimeter of a flat floodplain appearing at once
+ *  in a section of one roughness), not a normal depth. */
+export const conveyanceJumpFraction = 1e-6;

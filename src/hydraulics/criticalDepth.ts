@@ -127,9 +127,15 @@ export function criticalDepths(hs: HydraulicSection, discharge: number): number[
   return [...specificEnergyExtrema(hs, discharge).minima];
 }
 
-/** The critical depth of least specific energy. */
+/**
+ * The critical depth of least specific energy. In an irregular section whose specific energy is still
+ * falling at its end points (a further minimum lies above them) and is there below every minimum inside,
+ * the least-energy critical depth lies above the section: a HydraulicError asks for the section to be extended.
+ */
 export function criticalDepth(hs: HydraulicSection, discharge: number): number {
-  const depths = criticalDepths(hs, discharge);
+  requireDischarge(discharge, 'critical depth');
+  const extrema = specificEnergyExtrema(hs, discharge);
+  const depths = extrema.minima;
   let best = depths[0]!;
   let least = energyAt(hs, best, discharge);
   for (const y of depths.slice(1)) {
@@ -138,6 +144,9 @@ export function criticalDepth(hs: HydraulicSection, discharge: number): number {
       least = e;
       best = y;
     }
+  }
+  if (extrema.fallingAtTop && energyAt(hs, extrema.top, discharge) < least) {
+    throw extendSectionError(hs.section, `the critical depth of least specific energy (Q = ${discharge})`);
   }
   return best;
 }

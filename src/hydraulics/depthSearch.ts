@@ -225,7 +225,8 @@ export function conjugateDepth(
     if (next === undefined) return { beyond: true };
     const above = crossings.depths.filter((d) => d > next);
     const first = above[0];
-    return first === undefined ? { beyond: crossings.beyondTop } : { depth: first, beyond: false };
+    // none found: it lies above the top if the curve ends below the level, rising or still falling
+    return first === undefined ? { beyond: crossings.beyondTop || extrema.fallingAtTop } : { depth: first, beyond: false };
   }
   const previous = [...extrema.minima].reverse().find((m) => m < y);
   const below = previous === undefined ? [] : crossings.depths.filter((d) => d < previous);

@@ -17,7 +17,7 @@
  */
 import { NumericalError } from '../core/errors.js';
 import { brentMinimum, brentRoot, expandUpward, scanSignChanges } from '../core/roots.js';
-import { horizontalSlope } from '../core/tolerances.js';
+import { conveyanceJumpFraction, horizontalSlope } from '../core/tolerances.js';
 import { conveyance, type HydraulicSection } from './hydraulicSection.js';
 import { depthTolerance, extendSectionError, requireDischarge, requireSlope, smallestDepth } from './depthSearch.js';
 import { depthTable } from './depthTable.js';
@@ -81,7 +81,11 @@ export function normalDepths(hs: HydraulicSection, discharge: number, slope: num
     const fa = table.conveyance[i]! * root - discharge;
     const fb = table.conveyance[i + 1]! * root - discharge;
     if (fa === 0) depths.push(table.depth[i]!);
-    else if (fa * fb < 0) depths.push(solve(table.depth[i]!, table.depth[i + 1]!));
+    else if (fa * fb < 0) {
+      const y = solve(table.depth[i]!, table.depth[i + 1]!);
+      // a sign change across a jump of conveyance (a flat floodplain wetted at once) is not a root
+      if (Math.abs(residual(y)) <= conveyanceJumpFraction * discharge) depths.push(y);
+    }
   }
   const last = table.depth.length - 1;
   if (table.conveyance[last]! * root === discharge) depths.push(table.depth[last]!);

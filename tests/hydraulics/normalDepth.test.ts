@@ -126,6 +126,23 @@ describe('normalDepth', () => {
     expect(() => normalDepths(shallow, 20, 0.001)).toThrow(/extend the section/);
   });
 
+  it('normalDepths(points) skips a jump of conveyance at a flat floodplain of the same roughness', () => {
+    // one roughness, no subdivision: the floodplain's wetted perimeter appears at once at bank level, so K
+    // drops there (the known artefact of an undivided section, Chow 1959 ch. 6). Every depth returned must
+    // satisfy Q = K√S0; a discharge inside the drop has one root below bank level and one above it.
+    const hs = hydraulicSection(points({ points: [[0, 1], [0, 0.5], [5, 0.5], [5.5, 0], [6.5, 0], [7, 0.5], [12, 0.5], [12, 1]], roughness: 0.01 }), 'manning', SI);
+    const s = 1e-5;
+    const below = conveyance(hs, 0.5 - 1e-9) * Math.sqrt(s);
+    const above = conveyance(hs, 0.5 + 1e-9) * Math.sqrt(s);
+    expect(above).toBeLessThan(below);
+    const q = 0.5 * (above + below);
+    const r = normalDepths(hs, q, s);
+    expect(r.depths.length).toBe(2);
+    expect(r.depths[0]!).toBeLessThan(0.5);
+    expect(r.depths[1]!).toBeGreaterThan(0.5 + 1e-6);
+    for (const y of r.depths) assertRelative(conveyance(hs, y) * Math.sqrt(s), q, 1e-9, `y = ${y}`);
+  });
+
   it('normalDepths(compound) in the main channel equals the trapezoid depth (b = 10, z = 1, n = 0.03)', () => {
     // below bank level the compound section is the trapezoid alone: same Manning normal depth
     const q = 15, s = 0.0005;
