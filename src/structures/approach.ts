@@ -5,6 +5,7 @@
  */
 import { HydraulicError } from '../core/errors.js';
 import { brentRoot, scanSignChanges } from '../core/roots.js';
+import { minimumDepthFraction } from '../core/tolerances.js';
 import type { Units } from '../core/units.js';
 import { structureTolerance } from './invert.js';
 import type { ApproachArea } from './types.js';
@@ -32,7 +33,7 @@ export function approachStage(
   const f = (stage: number) => approachEnergy(stage, discharge, area, units) - energy;
   const span = energy - floor;
   if (!(span > 0)) return energy;
-  const brackets = scanSignChanges(f, floor + span * 1e-9, energy);
+  const brackets = scanSignChanges(f, floor + span * minimumDepthFraction, energy);
   const last = brackets[brackets.length - 1];
   if (!last) {
     throw new HydraulicError(

@@ -19,6 +19,7 @@
  */
 import { HydraulicError, requireInput } from '../core/errors.js';
 import { brentRoot } from '../core/roots.js';
+import { depthAbsoluteTolerance, rootMaxIterations } from '../core/tolerances.js';
 import type { Units } from '../core/units.js';
 import type { JumpType } from '../results/types.js';
 import { approachStage } from './approach.js';
@@ -105,8 +106,9 @@ export function toeDepth(unitDischarge: number, availableEnergy: number, lossCoe
   }
   // f → +∞ as y → 0; bracket the supercritical root on (ε, yMin).
   let lo = yMin / 2;
-  for (let i = 0; i < 200 && f(lo) <= 0; i++) lo /= 2;
-  return brentRoot(f, lo, yMin, { xTolerance: structureTolerance(yMin) * 1e-2, what: 'spillway toe depth' });
+  for (let i = 0; i < rootMaxIterations && f(lo) <= 0; i++) lo /= 2;
+  if (f(lo) <= 0) throw new HydraulicError(`spillway toe: no supercritical depth found below ${lo}`);
+  return brentRoot(f, lo, yMin, { xTolerance: Math.max(structureTolerance(lo), depthAbsoluteTolerance * yMin), what: 'spillway toe depth' });
 }
 
 export interface SpillwaySpec {
@@ -148,7 +150,7 @@ export function spillway(spec: SpillwaySpec, discharge: number, tailwaterStage: 
   const coefficientAt = (h: number) => spec.coefficient ?? usbrOgeeCoefficientAt(h > 0 ? p / h : Infinity, units);
   const q = (h: number) => (h <= 0 ? 0 : coefficientAt(h) * L * Math.pow(h, 1.5));
   const guess = Math.pow(discharge / (3 * L), 2 / 3);
-  const head = invertRising(q, discharge, { lo: 0, guess, scale: Math.max(guess, p, 1e-3), what: 'spillway head' });
+  const head = invertRising(q, discharge, { lo: 0, guess, scale: Math.max(guess, p), what: 'spillway head' });
   const energy = spec.crestElevation + head;
   const stage = approachStage(energy, spec.crestElevation, discharge, spec.approachArea, units);
   const unit = discharge / width;

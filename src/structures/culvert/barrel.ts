@@ -5,6 +5,7 @@
  */
 import { requireInput } from '../../core/errors.js';
 import { brentRoot, scanSignChanges } from '../../core/roots.js';
+import { minimumDepthFraction } from '../../core/tolerances.js';
 import type { Units } from '../../core/units.js';
 import type { Elements } from '../../geometry/section.js';
 import { circularSegment } from '../../geometry/shapes/circular.js';
@@ -70,7 +71,7 @@ export function barrelCriticalDepth(b: Barrel, discharge: number, units: Units):
     return discharge * discharge * e.topWidth - units.g * e.area * e.area * e.area;
   };
   // f > 0 near the invert (A → 0), f < 0 at the crown (T = 0): one sign change.
-  const lo = D * 1e-9;
+  const lo = D * minimumDepthFraction;
   if (f(lo) <= 0) return lo;
   return brentRoot(f, lo, D, { xTolerance: structureTolerance(D), what: 'critical depth in the culvert barrel' });
 }
@@ -98,7 +99,7 @@ export function barrelNormalDepth(b: Barrel, discharge: number, slope: number, r
   if (!(slope > 0) || discharge <= 0) return null;
   const D = b.rise;
   const f = (y: number) => barrelConveyance(b, y, roughness, units) * Math.sqrt(slope) - discharge;
-  const top = D * (1 - 1e-9);
+  const top = D * (1 - minimumDepthFraction);
   const brackets = scanSignChanges(f, 0, top);
   const first = brackets[0];
   if (!first) return null;

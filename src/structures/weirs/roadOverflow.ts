@@ -59,7 +59,7 @@ export function roadOverflowLaw(spec: RoadOverflowSpec, units: Units): WeirLaw {
       coefficientCurveApplies: lr === undefined ? null : h / lr > 0.15,
     }),
     notes,
-    scale: Math.max(L / 20, 0.1 * (units.system === 'US' ? 3.2808 : 1)),
+    scale: L / 20,
   };
 }
 
