@@ -6,8 +6,8 @@
  * Stages:
  *   1. strip a UTF-8 byte-order mark; refuse NUL bytes (UTF-16 or binary files);
  *   2. turn CRLF and lone CR line breaks into LF (so line counting and papaparse agree);
- *   3. papaparse row by row (delimiter fixed to a comma), recording where each row starts (meta.cursor);
- *   4. locate each field's start inside its row (a quoted field may span lines) to give its line;
+ *   3. papaparse with the delimiter fixed to a comma and blank lines kept, so rows map to lines;
+ *   4. give each row and field its line, counting the line breaks kept inside quoted fields;
  *   5. drop blank rows (all cells empty) and comment rows (first cell starting with `#`);
  *   6. the first remaining row is the header; a semicolon or tab inside it means another delimiter: refused.
  *
@@ -52,37 +52,37 @@ export function parseCsvTable(text: string, fileLabel: string): CsvTable {
     throw new InputError({ where: at(fileLabel, line, 1), message: say.notText() });
   }
   source = source.replace(/\r\n?/g, '\n');
-  const starts = lineStarts(source);
-
-  const rows: CsvRow[] = [];
-  let rowStart = 0;
-  let parseError: { line: number; message: string } | undefined;
-  Papa.parse<string[]>(source, {
+  const parsed = Papa.parse<string[]>(source, {
     delimiter: ',',
     newline: '\n',
     header: false,
     skipEmptyLines: false,
     dynamicTyping: false,
-    step(result, parser) {
-      const start = rowStart;
-      rowStart = result.meta.cursor;
-      const line = lineOf(starts, start);
-      const error = result.errors[0];
-      if (error !== undefined) {
-        parseError = { line, message: say.badQuotes(error.code) };
-        parser.abort();
-        return;
-      }
-      const fields = result.data;
-      const fieldLines = locateFields(source, start, fields.length, starts);
-      const cells = fields.map((raw, i) => ({ text: raw.trim(), line: fieldLines[i] ?? line, column: i + 1 }));
-      if (cells.every((c) => c.text === '')) return;
-      if (cells[0]?.text.startsWith('#')) return;
-      rows.push({ line, cells });
-    },
   });
-  if (parseError !== undefined) {
-    throw new InputError({ where: at(fileLabel, parseError.line), message: parseError.message });
+  const error = parsed.errors[0];
+
+  // With blank lines kept, papaparse gives one row per line, except that a line break inside a quoted field
+  // (kept in the field's text) continues the row. So a row's line is its index plus the breaks inside the
+  // fields before it, and a field's line adds the breaks in the fields before it in its row.
+  const rows: CsvRow[] = [];
+  let line = 1;
+  for (const [index, fields] of parsed.data.entries()) {
+    if (error !== undefined && index >= (error.row ?? Infinity)) break;
+    const rowLine = line;
+    const cells: CsvCell[] = [];
+    let blank = true;
+    for (const [i, raw] of fields.entries()) {
+      const text = raw.trim();
+      if (text !== '') blank = false;
+      cells.push({ text, line, column: i + 1 });
+      for (let k = raw.indexOf('\n'); k >= 0; k = raw.indexOf('\n', k + 1)) line += 1;
+    }
+    line += 1;
+    if (blank || cells[0]?.text.startsWith('#')) continue;
+    rows.push({ line: rowLine, cells });
+  }
+  if (error !== undefined) {
+    throw new InputError({ where: at(fileLabel, line), message: say.badQuotes(error.code) });
   }
 
   const header = rows.shift();
@@ -111,47 +111,4 @@ function lineStarts(text: string): number[] {
   const starts = [0];
   for (let i = text.indexOf('\n'); i >= 0; i = text.indexOf('\n', i + 1)) starts.push(i + 1);
   return starts;
-}
-
-/** 1-based line holding offset `offset` (binary search over line starts). */
-function lineOf(starts: readonly number[], offset: number): number {
-  let lo = 0;
-  let hi = starts.length - 1;
-  while (lo < hi) {
-    const mid = (lo + hi + 1) >> 1;
-    if ((starts[mid] ?? 0) <= offset) lo = mid;
-    else hi = mid - 1;
-  }
-  return lo + 1;
-}
-
-/**
- * The line where each field of the row starting at `start` begins. Follows RFC 4180 quoting as papaparse
- * does: a quote opens a quoted field only at the field's start, and `""` inside it is a literal quote.
- * If the count disagrees with papaparse's, positions fall back to the row's line (cellAt's default).
- */
-function locateFields(text: string, start: number, count: number, starts: readonly number[]): number[] {
-  const lines: number[] = [lineOf(starts, start)];
-  let i = start;
-  let fieldStart = start;
-  let quoted = false;
-  // Bounded by the text length: each pass advances i by at least one.
-  while (i < text.length) {
-    const c = text[i];
-    if (quoted) {
-      if (c === '"') {
-        if (text[i + 1] === '"') i += 1;
-        else quoted = false;
-      }
-    } else if (c === '"' && i === fieldStart) {
-      quoted = true;
-    } else if (c === ',') {
-      fieldStart = i + 1;
-      lines.push(lineOf(starts, fieldStart));
-    } else if (c === '\n') {
-      break;
-    }
-    i += 1;
-  }
-  return lines.length === count ? lines : [];
 }
