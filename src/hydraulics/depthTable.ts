@@ -3,8 +3,8 @@
  * sections whose curves may have several (irregular and compound sections, closed conduits).
  *
  * Geometry, conveyance and α do not depend on the discharge for Manning and Chézy, so the table is kept per
- * HydraulicSection object and reused for every discharge (a profile asks for critical depth at every
- * station and flow). Darcy–Weisbach conveyance depends on the discharge (Reynolds number): that table is
+ * section (and friction law, unit system and fixed α) and reused for every discharge (a profile asks for
+ * critical depth at every station and flow). Sections are immutable, so a kept table never goes stale. Darcy–Weisbach conveyance depends on the discharge (Reynolds number): that table is
  * built for the discharge asked and not kept.
  */
 import { scanSamples } from '../core/tolerances.js';
@@ -20,7 +20,7 @@ export interface DepthTable {
   readonly alpha: Float64Array;
 }
 
-const kept = new WeakMap<HydraulicSection, DepthTable>();
+const kept = new WeakMap<HydraulicSection['section'], Map<string, DepthTable>>();
 
 function build(hs: HydraulicSection, top: number, discharge: number | undefined): DepthTable {
   const n = scanSamples + 1;
@@ -53,10 +53,16 @@ function build(hs: HydraulicSection, top: number, discharge: number | undefined)
  */
 export function depthTable(hs: HydraulicSection, top: number, discharge: number): DepthTable {
   if (hs.law === 'darcy-weisbach' || top !== hs.section.maxDepth) return build(hs, top, discharge);
-  let table = kept.get(hs);
+  let byLaw = kept.get(hs.section);
+  if (!byLaw) {
+    byLaw = new Map();
+    kept.set(hs.section, byLaw);
+  }
+  const key = `${hs.law}|${hs.units.system}|${hs.alpha ?? ''}`;
+  let table = byLaw.get(key);
   if (!table) {
     table = build(hs, top, undefined);
-    kept.set(hs, table);
+    byLaw.set(key, table);
   }
   return table;
 }
