@@ -125,7 +125,7 @@ describe('readStations', () => {
   });
 
   it('readStations(text) refuses a bank below the bed', () => {
-    expect(problemsOf('station,bed,section,lob,rob\n0,10,a,9.5,11\n10,9,a,10,10\n')).toEqual([
+    expect(problemsOf('station,bed,section,left top,right top\n0,10,a,9.5,11\n10,9,a,10,10\n')).toEqual([
       'stations.csv:2:4: left bank 9.5 is below the bed elevation 10; bank (top of bank or lining) elevations must be at or above the bed',
     ]);
   });
