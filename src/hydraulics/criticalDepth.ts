@@ -3,7 +3,7 @@
  *
  * - Shapes whose section factor A³/T rises with depth and whose α is constant (rectangular, trapezoidal,
  *   triangular, circular; one roughness): E has one minimum, where dE/dy = 0, i.e. the Froude condition
- *   α·Q²·T = g·A³ (Chow 1959, §3-2, eq. 3-5 with α). Solved by Brent's method on g·A³ − α·Q²·T, which is
+ *   α·Q²·T = g·A³ (Chow, Open-Channel Hydraulics, 1959, ch. 3–4; chapters from memory). Solved by Brent's method on g·A³ − α·Q²·T, which is
  *   negative at small depth and positive above critical depth.
  * - Irregular and compound sections: A³/T may fall where the water spills onto a floodplain, and α changes
  *   with depth, so E may have several local minima (Blalock & Sturm 1981, "Minimum specific energy in
@@ -14,8 +14,9 @@
  * Circular conduit near the crown: T → 0 as y → D, so A³/T → ∞ and the Froude condition has a root below
  * the crown for every discharge; critical depth approaches the crown only as Q grows without bound.
  * The result is always inside the conduit (at most D; a value equal to D means the root lies within the
- * depth tolerance of the crown). Above about 0.9·D the critical depth changes fast with discharge and a
- * small change of Q moves it a lot (see the test of this module for the computed numbers).
+ * depth tolerance of the crown). Near the crown it is very sensitive to discharge: from the segment
+ * formulas, Q/√(gD⁵) = 0.618 at yc/D = 0.8, 0.829 at 0.9, 1.025 at 0.95, 1.306 at 0.98 and 1.556 at 0.99,
+ * so above about 0.9·D a few percent of discharge moves critical depth by several percent of D.
  */
 import { HydraulicError, NumericalError } from '../core/errors.js';
 import { brentRoot, expandUpward } from '../core/roots.js';

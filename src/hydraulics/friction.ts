@@ -5,7 +5,7 @@
  * - Chézy (1775): K = C·A·√R, C in the unit system's own units (m^½/s or ft^½/s).
  * - Darcy–Weisbach with Colebrook–White (1939): K = A·√(8gR/f), with f from
  *   1/√f = −2·log10(ks/(14.8R) + 2.51/(Re·√f)), Re = 4RV/ν (the pipe formula with D = 4R, as used for
- *   open channels, e.g. Chow 1959 §8-3 and Chadwick & Morfett, Hydraulics in Civil Engineering).
+ *   open channels, e.g. Chow 1959 ch. 8 (chapter from memory) and Chadwick & Morfett, Hydraulics in Civil Engineering).
  *   Without a discharge the fully rough limit (Re → ∞) is used.
  */
 import { brentRoot } from '../core/roots.js';

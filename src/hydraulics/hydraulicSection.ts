@@ -1,7 +1,7 @@
 /**
  * A section with its friction law and unit system: everything the depth solvers need.
  * Conveyance and the kinetic-energy coefficient α come from the roughness subsections
- * (Chow 1959, §6-4 and eq. 2-5: α = Σ(Ki³/Ai²) / (K³/A²)).
+ * (Chow 1959, ch. 2 and 6, chapters from memory: α = Σ(Ki³/Ai²) / (K³/A²)).
  */
 import type { Units } from '../core/units.js';
 import type { Section } from '../geometry/section.js';

@@ -1,6 +1,6 @@
 /**
  * Normal depth: the depth of uniform flow, where the friction slope equals the bed slope, Q = K(y)·√S0
- * (Chow 1959, §6-2 and ch. 6 for Manning; the same condition for Chézy and Darcy–Weisbach, whose
+ * (Chow 1959, ch. 5–6 for Manning, chapters from memory; the same condition for Chézy and Darcy–Weisbach, whose
  * conveyance depends on the discharge through the Reynolds number, so the discharge is passed on).
  * Solved by Brent's method on K(y)·√S0 − Q.
  *

@@ -1,5 +1,5 @@
 /**
- * Slope classification of a channel for a discharge (Chow 1959, §9-2): mild where normal depth is above
+ * Slope classification of a channel for a discharge (Chow 1959, ch. 9; chapter from memory): mild where normal depth is above
  * critical depth, steep where it is below, critical where they coincide, horizontal (S0 = 0) and adverse
  * (S0 < 0) where there is no normal depth.
  *
@@ -47,7 +47,7 @@ export function classifySlope(
 
 /**
  * The critical slope for a discharge: the bed slope whose normal depth is the critical depth,
- * Sc = (Q/K(yc))² (Chow 1959, §6-3), with yc the critical depth of least specific energy.
+ * Sc = (Q/K(yc))² (Chow 1959, ch. 6; chapter from memory), with yc the critical depth of least specific energy.
  */
 export function criticalSlope(hs: HydraulicSection, discharge: number): number {
   requireDischarge(discharge, 'critical slope');

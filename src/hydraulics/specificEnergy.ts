@@ -1,7 +1,7 @@
 /**
  * Specific energy E = y + α·V²/(2g) = y + α·Q²/(2gA²), measured from the lowest point of the section
- * (Bakhmeteff 1912; Chow 1959, §3-1), and the alternate depth: the other depth carrying the same
- * discharge with the same specific energy (Chow 1959, §3-1).
+ * (Bakhmeteff 1912; Chow 1959, ch. 3), and the alternate depth: the other depth carrying the same
+ * discharge with the same specific energy (chapter from memory).
  *
  * In a section with several critical depths (compound sections) the alternate of a supercritical depth
  * (E falling with depth) is the first depth above the next critical depth with the same E, and the

@@ -1,10 +1,10 @@
 /**
  * Specific force (the momentum function) M = Q²/(gA) + A·ȳ, ȳ the depth of the centroid of the flow area
- * below the surface (Chow 1959, §3-6, eq. 3-17), with momentum coefficient β = 1: gvf takes the velocity
+ * below the surface (Chow 1959, ch. 3; chapter from memory), with momentum coefficient β = 1: gvf takes the velocity
  * as uniform over the section for the momentum balance of a jump, as the classical jump equations do.
  *
  * dM/dy = A − Q²·T/(gA²), so M is least where Q²·T = g·A³: the critical depth for α = 1. Sequent
- * (conjugate) depths are the two depths with equal M (Chow 1959, §3-6); for a rectangle they obey
+ * (conjugate) depths are the two depths with equal M (Chow 1959, ch. 3 and 15); for a rectangle they obey
  * Bélanger's equation y2/y1 = ½(√(1 + 8F1²) − 1) (Chow 1959, eq. 3-21). This module finds them for any
  * section by bracketed search on M itself, so no shape-specific formula is needed.
  */

@@ -10,7 +10,7 @@ import { compound, pipe, rect, SI, trap, US } from './sections.js';
 
 describe('criticalDepth', () => {
   it('criticalDepth(rectangular) equals (q²/g)^(1/3) and E(yc) = 1.5·yc', () => {
-    // exact: Chow 1959, Open-Channel Hydraulics, §4-2 (critical flow in a rectangular channel); published
+    // exact closed form of the Froude condition for a rectangle (Chow, Open-Channel Hydraulics, 1959, ch. 4, critical flow; published, chapter from memory)
     for (const [b, q, units] of [[3, 6, SI], [0.5, 0.02, SI], [20, 400, US]] as const) {
       const hs = rect(b, 0.015, units);
       const yc = criticalDepth(hs, q);
@@ -29,7 +29,7 @@ describe('criticalDepth', () => {
   });
 
   it('criticalDepth(trapezoidal) meets the Froude condition αQ²T = gA³', () => {
-    // Chow 1959, §3-2 (definition of critical flow with α); exact
+    // definition of critical flow with α (Chow 1959, ch. 3; chapter from memory); exact
     const hs = trap(3, 1.5, 0.02, SI, 1.15);
     const yc = criticalDepth(hs, 12);
     const b = 3, z = 1.5;
@@ -91,7 +91,7 @@ describe('criticalDepth', () => {
     // the critical depth is the one of least specific energy: the main-channel one at 70, the floodplain one at 80
     expect(criticalDepth(hs, 70)).toBeLessThan(2);
     expect(criticalDepth(hs, 80)).toBeGreaterThan(2);
-    // α > 1 at the floodplain critical depth (subsection method, Chow 1959 §6-4; published)
+    // α > 1 at the floodplain critical depth (subsection method, Chow 1959 ch. 6; published, chapter from memory)
     expect(conveyanceAndAlpha(hs, criticalDepths(hs, 80)[1]!).alpha).toBeGreaterThan(1);
   });
 
