@@ -375,7 +375,8 @@ export function computeProfile(input: ProfileInput, options: EngineOptions = {})
       const s = subs[i];
       if (s === null || s === undefined) return false;
       if (i >= sup.length) return true;
-      return force(piece.reach.section, s, q) >= force(piece.reach.section, sup[i]!, q);
+      // strictly greater: two profiles meeting at critical depth (a critical slope) join without a jump
+      return force(piece.reach.section, s, q) > force(piece.reach.section, sup[i]!, q) * (1 + 1e-9);
     };
     let i0 = -1;
     for (let i = 0; i < stations.length; i++) {

@@ -2,14 +2,19 @@
 import { directStep } from './directStep.js';
 import { odeProfile, odeReference } from './ode.js';
 import { standardStep } from './standardStep.js';
-import type { ProfileIntegrator } from './stretch.js';
+import { type ProfileIntegrator, settleOnCriticalSlope } from './stretch.js';
 import type { ProfileMethod } from './types.js';
 
+const settled =
+  (integrator: ProfileIntegrator): ProfileIntegrator =>
+  (spec) =>
+    settleOnCriticalSlope(spec, integrator(spec));
+
 export const integrators: Readonly<Record<ProfileMethod, ProfileIntegrator>> = {
-  'standard-step': standardStep,
-  'direct-step': directStep,
-  ode: odeProfile,
+  'standard-step': settled(standardStep),
+  'direct-step': settled(directStep),
+  ode: settled(odeProfile),
 };
 
 /** The ODE method at a tight tolerance, the yardstick of compareMethods. */
-export const referenceIntegrator: ProfileIntegrator = odeReference;
+export const referenceIntegrator: ProfileIntegrator = settled(odeReference);

@@ -135,7 +135,7 @@ function stationLeg(
   x0: number,
   y0: number,
   watchBand: boolean,
-): { x: number; y: number; entered: boolean; full: boolean } {
+): { x: number; y: number; entered: boolean; full: boolean; reachedCritical: boolean } {
   const slope = spec.slope;
   const floor = floorDepth(spec);
   const top = ceilingDepth(spec);
@@ -148,7 +148,11 @@ function stationLeg(
     if (branch < 0 && yy > yc) yy = yc;
     if (yy < floor) yy = floor;
     if (yy > top) yy = top;
-    return [depthGradient(stateAt(spec, yy), slope, nearCriticalFloor)];
+    if (!spec.criticalSlope) return [depthGradient(stateAt(spec, yy), slope, nearCriticalFloor)];
+    // critical slope: the ratio is finite through critical depth; at it (0/0) take it just on the branch side
+    let s = stateAt(spec, yy);
+    if (Math.abs(s.dEdy) < 1e-9) s = stateAt(spec, yc * (1 + branch * 1e-6));
+    return [depthGradient(s, slope)];
   };
   const xLast = spec.stations[spec.stations.length - 1]!;
   const solver = solverFor(settings, xLast - x0);
@@ -156,13 +160,19 @@ function stationLeg(
   let yStop = y0;
   let entered = false;
   let full = false;
+  let reachedCritical = false;
   const result = solver.solve(f, x0, [y0], xLast, (n, xOld, x, yv, dense) => {
     xStop = x;
     yStop = yv[0]!;
     if (n === 1 || !dense) return;
     let limit = x;
     const inBand = (d: number) => Math.abs(stateAt(spec, Math.min(Math.max(d, floor), top)).dEdy) < nearCriticalBand;
-    if (watchBand && inBand(yStop)) {
+    if (spec.criticalSlope && branch * (yStop - yc) <= 0) {
+      // reached critical (= normal) depth on a critical slope: stop there (settleOnCriticalSlope continues it uniform)
+      const g = (xx: number) => dense(0, xx) - yc;
+      limit = g(xOld) * g(x) <= 0 ? brentRoot(g, Math.min(xOld, x), Math.max(xOld, x), { xTolerance: spec.tolerance * 1e-3, what: 'critical depth reached' }) : xOld;
+      reachedCritical = true;
+    } else if (watchBand && inBand(yStop)) {
       // where the band is entered within this step
       const g = (xx: number) => Math.abs(stateAt(spec, Math.min(Math.max(dense(0, xx), floor), top)).dEdy) - nearCriticalBand;
       limit = g(xOld) <= 0 ? xOld : brentRoot(g, Math.min(xOld, x), Math.max(xOld, x), { xTolerance: spec.tolerance * 1e-3, what: 'near-critical band entry' });
@@ -176,7 +186,7 @@ function stationLeg(
       out.depths.push(dense(0, s));
       out.next++;
     }
-    if (entered || full) {
+    if (entered || full || reachedCritical) {
       xStop = limit;
       yStop = dense(0, limit);
       return false;
@@ -184,7 +194,7 @@ function stationLeg(
   });
   out.steps += result.nStep;
   if (result.outcome === 1) throw new NumericalError(`ODE method: too many steps from station ${x0}`);
-  return { x: xStop, y: yStop, entered, full };
+  return { x: xStop, y: reachedCritical ? yc : yStop, entered, full, reachedCritical };
 }
 
 function integrate(spec: StretchSpec, settings: OdeSettings): StretchProfile {
@@ -244,6 +254,7 @@ function integrate(spec: StretchSpec, settings: OdeSettings): StretchProfile {
     }
     const leg = stationLeg(spec, settings, out, x, y, !spec.criticalSlope);
     if (leg.full) return stopAt(leg.x, leg.y, 'full');
+    if (leg.reachedCritical) return stopAt(leg.x, yc, 'critical');
     if (!leg.entered) return done();
     x = leg.x;
     y = leg.y;

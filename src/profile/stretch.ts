@@ -106,3 +106,15 @@ export function depthTrend(spec: StretchSpec, state: PointState): number {
   if (drive === 0) return 0;
   return Math.sign(drive / d) * direction;
 }
+
+/**
+ * On a critical slope normal and critical depth coincide (within the classification band): a profile that
+ * reaches critical depth has reached the uniform state, and continues at it (Chow 1959 §9-2: the C1 and C3
+ * curves end on the line y = yn = yc). The stop is replaced by uniform flow at the depth reached.
+ */
+export function settleOnCriticalSlope(spec: StretchSpec, profile: StretchProfile): StretchProfile {
+  if (!spec.criticalSlope || !profile.stop || profile.stop.reason !== 'critical') return profile;
+  const depths = [...profile.depths];
+  while (depths.length < spec.stations.length) depths.push(profile.stop.depth);
+  return { depths, steps: profile.steps };
+}
