@@ -16,7 +16,7 @@ import { accuracyFor } from './core/tolerances.js';
 import { assembleProfileInputs, assembleSections } from './assemble.js';
 import type { HydraulicSection } from './hydraulics/hydraulicSection.js';
 import type { Model } from './input/model/types.js';
-import { computeProfile } from './profile/index.js';
+import { computeProfile } from './profile/engine.js';
 import { ProfileMethod, type ProfileInput } from './profile/types.js';
 import type { FlowResult, RunResult } from './results/types.js';
 import { screeningCaution } from './runSection.js';

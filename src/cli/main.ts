@@ -120,6 +120,11 @@ function invokedDirectly(): boolean {
 }
 
 if (invokedDirectly()) {
+  // a reader that stops early (gvf run m.json | head) is not an error
+  process.stdout.on('error', (error: NodeJS.ErrnoException) => {
+    if (error.code === 'EPIPE') process.exit(process.exitCode ?? 0);
+    throw error;
+  });
   main(process.argv.slice(2)).then(
     (code) => {
       process.exitCode = code;

@@ -235,7 +235,7 @@ export function runReport(run: RunResult, comparison?: MethodComparison): string
     parts.push('', `method comparison (${comparison.methods.join(', ')}):`);
     for (const c of comparison.flows) {
       parts.push(
-        `  flow ${c.id}: largest depth difference ${withUnit(c.largestDifference, u.length, 4)} at station ${formatNumber(c.station, 2)} ` +
+        `  flow ${c.id}: largest depth difference ${formatSignificant(c.largestDifference, 3)} ${u.length} at station ${formatNumber(c.station, 2)} ` +
           `(${c.between.join(' vs ')}); ${c.withinGoal ? 'within' : 'OUTSIDE'} the accuracy goal` +
           (c.largestToeShift > 0 ? `; largest jump-toe shift ${withUnit(c.largestToeShift, u.length, 3)}` : ''),
       );
