@@ -77,6 +77,13 @@ describe('renderChart(spec)', () => {
     expect(frame(short.svg)[0]).toBeGreaterThan(700);
   });
 
+  it('renderChart(spec) gives byte-identical SVG and PNG for the same run (no clock, no random ids)', async () => {
+    const a = await renderChart(profileChart(twoReachRun()));
+    const b = await renderChart(profileChart(twoReachRun()));
+    expect(a.svg).toBe(b.svg);
+    expect(Buffer.from(a.png).equals(Buffer.from(b.png))).toBe(true);
+  });
+
   it('svgToPng(svg, scale) refuses a scale outside (0, 16]', async () => {
     await expect(svgToPng('<svg xmlns="http://www.w3.org/2000/svg" width="2" height="2"/>', 0)).rejects.toThrow(/scale/);
     await expect(svgToPng('<svg xmlns="http://www.w3.org/2000/svg" width="2" height="2"/>', Number.NaN)).rejects.toThrow(/scale/);

@@ -107,6 +107,21 @@ describe.skipIf(!hasChromium)(hasChromium ? 'report.html in headless Chromium' :
     await page.close();
   });
 
+  it('report.html in print layout fits the narrower printable width of A4 and Letter: no table or chart sticks out', async () => {
+    // A4 is 210 mm wide, Letter 215.9 mm; less the 13 mm side margins of the print CSS, A4 leaves 184 mm = 695 CSS px (96 px/in)
+    const page = await context.newPage();
+    await page.setViewportSize({ width: 695, height: 1000 });
+    await page.emulateMedia({ media: 'print' });
+    await page.goto(pathToFileURL(reportPath).href, { waitUntil: 'load' });
+    const overflow = await page.evaluate(() => {
+      const d = (globalThis as any).document;
+      const limit = d.documentElement.clientWidth + 1;
+      return [...d.querySelectorAll('table, figure.chart svg')].map((e: any) => e.getBoundingClientRect().right).filter((r: number) => r > limit);
+    });
+    expect(overflow).toEqual([]);
+    await page.close();
+  });
+
   it('report.html prints to A4 and to Letter', async () => {
     const page = await context.newPage();
     await page.goto(pathToFileURL(reportPath).href, { waitUntil: 'load' });

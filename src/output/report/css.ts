@@ -54,9 +54,11 @@ nav.toc a { color: var(--accent); text-decoration: none; }
 .card.bad { border-top-color: var(--warn); background: var(--warn-wash); }
 .flow { border: 1px solid var(--rule); padding: 4px 16px 12px; margin: 14px 0; }
 table { border-collapse: collapse; width: 100%; margin: 6px 0 10px; font-size: 12.5px; }
-th, td { padding: 3px 7px; border-bottom: 1px solid var(--rule); text-align: left; vertical-align: top; overflow-wrap: anywhere; }
+th, td { padding: 3px 7px; border-bottom: 1px solid var(--rule); text-align: left; vertical-align: top; overflow-wrap: break-word; }
+thead th { vertical-align: bottom; }
 thead th { background: #e6edf3; border-bottom: 2px solid #9fb2c4; font-weight: bold; }
-td.n, th.n { text-align: right; font-variant-numeric: tabular-nums; white-space: nowrap; }
+td.n, th.n { text-align: right; font-variant-numeric: tabular-nums; }
+td.n { white-space: nowrap; }
 tbody tr:nth-child(even) td { background: #f7f9fb; }
 td.fail, .fail { color: var(--warn); font-weight: bold; }
 td.pass { color: var(--pass); }
@@ -83,6 +85,9 @@ footer { padding: 12px 32px 24px; font-size: 12px; color: var(--muted); border-t
   thead { display: table-header-group; }
   section.part.stations { break-before: page; page-break-before: always; }
   .flow { border: none; padding: 0; }
+  table { font-size: 8.5pt; }
+  table.stations { font-size: 7.5pt; }
+  table.stations td, table.stations th { padding: 1px 3px; }
   thead th, .card, tbody tr:nth-child(even) td { -webkit-print-color-adjust: exact; print-color-adjust: exact; }
   a { color: inherit; text-decoration: none; }
 }

@@ -9,7 +9,6 @@
  */
 import type { FlowResult, FreeboardRow, RunResult, StationResult, StructureResult } from '../../results/types.js';
 import { accuracyGoal } from '../../core/tolerances.js';
-import { formatNumber } from '../table.js';
 import { escapeHtml as h, checkedSvg } from './escape.js';
 import { reportCss, type Paper } from './css.js';
 
@@ -85,9 +84,11 @@ function dischargeUnit(run: RunResult): string {
   return run.units === 'US' ? 'ft³/s' : 'm³/s';
 }
 
-/** A number for a table cell (fixed decimals), or "—" when it does not exist. */
+/** A number for a table cell (fixed decimals; −0 shows as 0), or "—" when it does not exist or is not finite. */
 function num(x: number | null | undefined, decimals = 3): string {
-  return typeof x === 'number' ? formatNumber(x, decimals) : '—';
+  if (typeof x !== 'number' || !Number.isFinite(x)) return '—';
+  const text = x.toFixed(decimals);
+  return /^-0(\.0*)?$/.test(text) ? text.slice(1) : text;
 }
 
 function valueText(v: ReportValue['value'], unit?: string): string {
@@ -174,7 +175,7 @@ function flowSummary(run: RunResult, flow: FlowResult, index: number, controls: 
   const fb = failures.length
     ? table(
         [`Station (${h(u)})`, `Water surface (${h(u)})`, `Energy line (${h(u)})`, `Left freeboard (${h(u)})`, `Right freeboard (${h(u)})`, `Required (${h(u)})`, 'Result'],
-        failures.map((f) => [num(f.station, 2), num(f.wsel), num(f.energyElevation), num(f.freeboardLeft), num(f.freeboardRight), num(f.required), `<td class="fail">${f.overtopped ? 'overtopped' : 'short of freeboard'}</td>`]),
+        failures.map((f) => [num(f.station, 2), num(f.wsel), num(f.energyElevation), num(f.freeboardLeft), num(f.freeboardRight), num(f.required), `<td class="fail">${f.overtopped ? 'overtopped' : 'too little'}</td>`]),
         { numeric: [true, true, true, true, true, true, false] },
       )
     : flow.freeboard
@@ -205,6 +206,8 @@ function stationTable(run: RunResult, flow: FlowResult): string {
   const fb = new Map<number, FreeboardRow[]>();
   for (const f of flow.freeboard ?? []) fb.set(f.station, [...(fb.get(f.station) ?? []), f]);
   const seen = new Map<number, number>();
+  // the note column is there only when some station was interpolated between surveyed sections
+  const anyInterpolated = flow.stations.some((s) => s.interpolated === true);
   const rows = flow.stations.map((s: StationResult) => {
     const k = seen.get(s.station) ?? 0;
     seen.set(s.station, k + 1);
@@ -223,12 +226,12 @@ function stationTable(run: RunResult, flow: FlowResult): string {
       num(s.criticalDepth),
       f ? `<td class="n${fail ? ' fail' : ''}">${num(f.freeboardLeft)}</td>` : '<td class="n">—</td>',
       f ? `<td class="n${fail ? ' fail' : ''}">${num(f.freeboardRight)}</td>` : '<td class="n">—</td>',
-      s.interpolated ? 'interpolated' : '',
+      ...(anyInterpolated ? [s.interpolated ? 'interpolated' : ''] : []),
     ];
   });
   return `<h3>Flow ${h(flow.id)} (${num(flow.discharge)} ${dischargeUnit(run)})</h3>
 ${table(
-  [`Station (${u})`, 'Reach', `Bed (${u})`, `Depth (${u})`, `Water surface (${u})`, `Energy line (${u})`, `Velocity (${v})`, 'Froude', 'Regime', `Critical depth (${u})`, `Left freeboard (${u})`, `Right freeboard (${u})`, 'Note'].map(h),
+  [`Station (${u})`, 'Reach', `Bed (${u})`, `Depth (${u})`, `Water surface (${u})`, `Energy line (${u})`, `Velocity (${v})`, 'Froude', 'Regime', `Critical depth (${u})`, `Left freeboard (${u})`, `Right freeboard (${u})`, ...(anyInterpolated ? ['Note'] : [])].map(h),
   rows,
   { numeric: [true, false, true, true, true, true, true, true, false, true, true, true, false], cls: 'stations' },
 )}`;
