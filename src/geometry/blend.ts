@@ -215,6 +215,11 @@ function blendPoints(up: PointsSection, down: PointsSection, t: number, options:
   }
   // offsets must stay non-decreasing: a blend of two non-decreasing functions of ξ is, but guard round-off
   for (let i = 1; i < pts.length; i++) if (pts[i]![0] < pts[i - 1]![0]) pts[i]![0] = pts[i - 1]![0];
+  // a vertical run keeps only its first and last points: walls blended against walls going the other way
+  // could otherwise double back (a slot of no width, with perimeter but no area)
+  for (let i = pts.length - 2; i >= 1; i--) {
+    if (pts[i]![0] === pts[i - 1]![0] && pts[i]![0] === pts[i + 1]![0]) pts.splice(i, 1);
+  }
   // place the lowest blended point at the invert (it is there already when the inverts correspond)
   const invert = options.invertElevation ?? lerp(l1.invert, l2.invert, t);
   let lowest = Infinity;
@@ -226,6 +231,7 @@ function blendPoints(up: PointsSection, down: PointsSection, t: number, options:
     (p, q) => p - q,
   );
   const end = xis[xis.length - 1]!;
+  const right = pts[pts.length - 1]![0];
   const zones: [number, number][] = [];
   for (let k = 0; k < starts.length; k++) {
     const from = starts[k]!;
@@ -234,8 +240,9 @@ function blendPoints(up: PointsSection, down: PointsSection, t: number, options:
     const value = lerp(roughnessAt(l1, verticesAt(l1, mid).x), roughnessAt(l2, verticesAt(l2, mid).x), t);
     const x = lerp(verticesAt(l1, from).x, verticesAt(l2, from).x, t);
     const last = zones[zones.length - 1];
-    if (last === undefined || x > last[0]) zones.push([x, value]);
-    else last[1] = value; // a piece of no width
+    if (last === undefined || x > last[0]) {
+      if (last === undefined || x < right) zones.push([x, value]);
+    } else last[1] = value; // a piece of no width
   }
   return points({ points: pts, roughness: zones.length === 1 ? zones[0]![1] : zones });
 }

@@ -13,7 +13,7 @@ import { InputError, type Problem, show } from '../core/errors.js';
 import { largestLength, largestSideSlope } from '../core/tolerances.js';
 import { ShapeKind, type Section } from './section.js';
 import { circular } from './shapes/circular.js';
-import { type RoughnessZoneSpec, type StationElevation, points } from './shapes/points.js';
+import { pointsSpecProblems, type RoughnessZoneSpec, type StationElevation, points } from './shapes/points.js';
 import { rectangular } from './shapes/rectangular.js';
 import { trapezoidal } from './shapes/trapezoidal.js';
 import { triangular } from './shapes/triangular.js';
@@ -96,103 +96,6 @@ function slopes(spec: { sideSlope: number; sideSlopeRight?: number }, problems: 
   return left && right ? [spec.sideSlope, spec.sideSlopeRight ?? spec.sideSlope] : null;
 }
 
-function validatePoints(spec: PointsSectionSpec, problems: Problem[]): void {
-  const list: unknown = spec.points;
-  if (!Array.isArray(list) || list.length < 3) {
-    problems.push({
-      where: 'points',
-      message: `must be a list of at least 3 [offset, elevation] pairs, got ${Array.isArray(list) ? `${list.length}` : show(list)}`,
-      value: list,
-    });
-    return;
-  }
-  let valid = true;
-  list.forEach((p: unknown, i) => {
-    const ok =
-      Array.isArray(p) && p.length === 2 && p.every((v) => isNumber(v) && Math.abs(v) <= largestLength);
-    if (!ok) {
-      problems.push({
-        where: `points[${i}]`,
-        message: `must be an [offset, elevation] pair of numbers within ±${largestLength}, got ${show(p)}`,
-        value: p,
-      });
-      valid = false;
-    }
-  });
-  if (!valid) return;
-  const pts = list as [number, number][];
-  for (let i = 1; i < pts.length; i++) {
-    const [x, z] = pts[i]!;
-    const [xp, zp] = pts[i - 1]!;
-    if (x < xp) {
-      problems.push({
-        where: `points[${i}]`,
-        message: `offset ${x} goes backwards (previous offset ${xp}); offsets must not decrease from left to right`,
-        value: pts[i],
-      });
-      valid = false;
-    } else if (i >= 2 && x === xp && xp === pts[i - 2]![0] && (z - zp) * (zp - pts[i - 2]![1]) < 0) {
-      problems.push({
-        where: `points[${i}]`,
-        message: `the vertical wall at offset ${x} doubles back on itself (elevations ${pts[i - 2]![1]}, ${zp}, ${z}); the ground line must not cross itself`,
-        value: pts[i],
-      });
-      valid = false;
-    }
-  }
-  if (!valid) return;
-  const left = pts[0]!;
-  const right = pts[pts.length - 1]!;
-  if (right[0] <= left[0]) {
-    problems.push({ where: 'points', message: `the section has no width (all offsets ${left[0]})`, value: list });
-    return;
-  }
-  const lowest = Math.min(...pts.map((p) => p[1]));
-  if (lowest >= Math.min(left[1], right[1])) {
-    problems.push({
-      where: 'points',
-      message: `holds no water: the lowest elevation ${lowest} is not below both end points (left ${left[1]}, right ${right[1]})`,
-      value: list,
-    });
-  }
-  const r: unknown = spec.roughness;
-  if (typeof r === 'number') {
-    roughnessValue(r, 'roughness', problems);
-    return;
-  }
-  if (!Array.isArray(r) || r.length === 0) {
-    problems.push({
-      where: 'roughness',
-      message: `must be a roughness value > 0 or a non-empty list of [fromOffset, value] zones, got ${show(r)}`,
-      value: r,
-    });
-    return;
-  }
-  let previous = -Infinity;
-  r.forEach((zone: unknown, i) => {
-    if (!Array.isArray(zone) || zone.length !== 2) {
-      problems.push({ where: `roughness[${i}]`, message: `must be a [fromOffset, value] pair, got ${show(zone)}`, value: zone });
-      return;
-    }
-    const [from, value] = zone as unknown[];
-    if (!isNumber(from) || from <= previous) {
-      problems.push({
-        where: `roughness[${i}][0]`,
-        message: `must be an offset greater than the previous zone's start (${previous}), got ${show(from)}`,
-        value: from,
-      });
-    } else if (i > 0 && from >= right[0]) {
-      problems.push({
-        where: `roughness[${i}][0]`,
-        message: `zone starts at ${from}, at or beyond the right end point (offset ${right[0]}); it would cover no ground`,
-        value: from,
-      });
-    }
-    if (isNumber(from)) previous = from;
-    roughnessValue(value, `roughness[${i}][1]`, problems);
-  });
-}
-
 const shapes: { readonly [K in ShapeKind]: ShapeEntry<K> } = {
   rectangular: {
     validate(spec, problems) {
@@ -241,7 +144,7 @@ const shapes: { readonly [K in ShapeKind]: ShapeEntry<K> } = {
     build: (spec) => circular({ diameter: spec.diameter, roughness: spec.roughness }),
   },
   points: {
-    validate: validatePoints,
+    validate: (spec, problems) => problems.push(...pointsSpecProblems(spec)),
     build: (spec) => points({ points: spec.points, roughness: spec.roughness }),
   },
 };
@@ -271,6 +174,7 @@ export { circular, circularSegment, isFull } from './shapes/circular.js';
 export { rectangular } from './shapes/rectangular.js';
 export { trapezoidal } from './shapes/trapezoidal.js';
 export { triangular } from './shapes/triangular.js';
-export { isPointsSection, points, pointsBounds } from './shapes/points.js';
+export { isPointsSection, points, pointsBounds, pointsSpecProblems } from './shapes/points.js';
 export type { EndPoint, PointsSection, PointsSpec, RoughnessZone, RoughnessZoneSpec, StationElevation } from './shapes/points.js';
-export { blendSections } from './blend.js';
+export { blendSections, prismaticAsPoints } from './blend.js';
+export type { BlendOptions } from './blend.js';

@@ -136,6 +136,24 @@ describe('points', () => {
     assertInDelta(two.firstMoment, 0.5 * (10 / 3 - 1.2) * 2 * (2 / 3) + 0.75 * (1 / 3), 1e-12, 'Aȳ, two pockets');
   });
 
+  it('points(spec).elements(y) stays finite and exact on nearly flat ground (rises of 1e-9 and of a subnormal)', () => {
+    // independent method: shoelace area of the wet pockets; found by a random case (a rise of 5e-324)
+    for (const ground of [
+      [[0, 2], [1, 0], [2, 5e-324], [12, 1e-9], [13, 2]],
+      [[0, 2], [1, 1e-9], [11, 0], [11.5, 0], [13, 2]],
+    ] as [number, number][][]) {
+      const s = points({ points: ground, roughness: 0.03 });
+      for (const y of [0, 5e-10, 1e-9, 0.5, 2]) {
+        const e = s.elements(y);
+        const area = wetPockets(ground, y).reduce((sum, p) => sum + shoelaceArea(p.polygon), 0);
+        assertInDelta(e.area, area, 1e-12, `A at ${y}`);
+        expect([e.wettedPerimeter, e.topWidth, e.firstMoment].every(Number.isFinite)).toBe(true);
+        // (at y = 0 ground flat at the invert counts as wet, as for a rectangle's bottom; widthAt counts it dry)
+        if (y > 0) assertInDelta(e.topWidth, widthAt(ground, y), 1e-9, `T at ${y}`);
+      }
+    }
+  });
+
   it('points(spec).elements(y) agrees with the shoelace area of the wet pockets and the integrated width, for random sections and depths', () => {
     // independent method: the ground line cut by the surface into closed polygons (shoelace area, clipped wetted
     // length), and A, Aȳ by integrating the top width over the depth (Gauss–Legendre, exact between kinks)

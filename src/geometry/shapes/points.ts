@@ -17,9 +17,11 @@
  * set of fully wet and partly wet ground segments is fixed, so with u = depth above the interval's base
  *   T(u) = T₀ + s·u,  A(u) = A₀ + T₀·u + s·u²/2,  A·ȳ(u) = M₀ + A₀·u + T₀·u²/2 + s·u³/6,  P(u) = P₀ + p·u
  * (dA/dy = T and d(Aȳ)/dy = A). These are the exact polygon formulas; a look-up is a binary search and
- * a few multiplications. Coefficients are stored per interval for the whole section and for each zone.
+ * a few multiplications. Coefficients are stored per interval for the whole section and for each zone,
+ * built in one upward sweep (O(N log N) for N points).
  */
-import { HydraulicError } from '../../core/errors.js';
+import { HydraulicError, InputError, type Problem, show } from '../../core/errors.js';
+import { largestLength } from '../../core/tolerances.js';
 import type { Elements, Section, SubsectionElements } from '../section.js';
 import { aboveLimit, checkDepth } from '../depth.js';
 
@@ -100,6 +102,119 @@ export function roughnessZones(roughness: PointsSpec['roughness'], left: number,
   return zones;
 }
 
+
+const isNumber = (v: unknown): v is number => typeof v === 'number' && Number.isFinite(v);
+
+function roughnessValue(value: unknown, where: string, problems: Problem[]): boolean {
+  const ok = isNumber(value) && value > 0;
+  if (!ok) problems.push({ where, message: `must be a roughness value > 0, got ${show(value)}`, value });
+  return ok;
+}
+
+/**
+ * The problems of a points spec (empty when valid): at least 3 [offset, elevation] pairs of finite numbers,
+ * offsets non-decreasing, no vertical wall doubling back, the lowest point below both end points, and
+ * roughness one value > 0 or zones with increasing starts inside the section and values > 0.
+ */
+export function pointsSpecProblems(spec: PointsSpec): Problem[] {
+  const problems: Problem[] = [];
+  const list: unknown = spec.points;
+  if (!Array.isArray(list) || list.length < 3) {
+    problems.push({
+      where: 'points',
+      message: `must be a list of at least 3 [offset, elevation] pairs, got ${Array.isArray(list) ? `${list.length}` : show(list)}`,
+      value: list,
+    });
+    return problems;
+  }
+  let valid = true;
+  list.forEach((p: unknown, i) => {
+    const ok =
+      Array.isArray(p) && p.length === 2 && p.every((v) => isNumber(v) && Math.abs(v) <= largestLength);
+    if (!ok) {
+      problems.push({
+        where: `points[${i}]`,
+        message: `must be an [offset, elevation] pair of numbers within ±${largestLength}, got ${show(p)}`,
+        value: p,
+      });
+      valid = false;
+    }
+  });
+  if (!valid) return problems;
+  const pts = list as [number, number][];
+  for (let i = 1; i < pts.length; i++) {
+    const [x, z] = pts[i]!;
+    const [xp, zp] = pts[i - 1]!;
+    if (x < xp) {
+      problems.push({
+        where: `points[${i}]`,
+        message: `offset ${x} goes backwards (previous offset ${xp}); offsets must not decrease from left to right`,
+        value: pts[i],
+      });
+      valid = false;
+    } else if (i >= 2 && x === xp && xp === pts[i - 2]![0] && (z - zp) * (zp - pts[i - 2]![1]) < 0) {
+      problems.push({
+        where: `points[${i}]`,
+        message: `the vertical wall at offset ${x} doubles back on itself (elevations ${pts[i - 2]![1]}, ${zp}, ${z}); the ground line must not cross itself`,
+        value: pts[i],
+      });
+      valid = false;
+    }
+  }
+  if (!valid) return problems;
+  const left = pts[0]!;
+  const right = pts[pts.length - 1]!;
+  if (right[0] <= left[0]) {
+    problems.push({ where: 'points', message: `the section has no width (all offsets ${left[0]})`, value: list });
+    return problems;
+  }
+  const lowest = Math.min(...pts.map((p) => p[1]));
+  if (lowest >= Math.min(left[1], right[1])) {
+    problems.push({
+      where: 'points',
+      message: `holds no water: the lowest elevation ${lowest} is not below both end points (left ${left[1]}, right ${right[1]})`,
+      value: list,
+    });
+  }
+  const r: unknown = spec.roughness;
+  if (typeof r === 'number') {
+    roughnessValue(r, 'roughness', problems);
+    return problems;
+  }
+  if (!Array.isArray(r) || r.length === 0) {
+    problems.push({
+      where: 'roughness',
+      message: `must be a roughness value > 0 or a non-empty list of [fromOffset, value] zones, got ${show(r)}`,
+      value: r,
+    });
+    return problems;
+  }
+  let previous = -Infinity;
+  r.forEach((zone: unknown, i) => {
+    if (!Array.isArray(zone) || zone.length !== 2) {
+      problems.push({ where: `roughness[${i}]`, message: `must be a [fromOffset, value] pair, got ${show(zone)}`, value: zone });
+      return;
+    }
+    const [from, value] = zone as unknown[];
+    if (!isNumber(from) || from <= previous) {
+      problems.push({
+        where: `roughness[${i}][0]`,
+        message: `must be an offset greater than the previous zone's start (${previous}), got ${show(from)}`,
+        value: from,
+      });
+    } else if (i > 0 && from >= right[0]) {
+      problems.push({
+        where: `roughness[${i}][0]`,
+        message: `zone starts at ${from}, at or beyond the right end point (offset ${right[0]}); it would cover no ground`,
+        value: from,
+      });
+    }
+    if (isNumber(from)) previous = from;
+    roughnessValue(value, `roughness[${i}][1]`, problems);
+  });
+  return problems;
+}
+
 /** The zone of a ground segment: the zone that holds its mid offset (a wall on a boundary goes right). */
 function zoneIndexAt(zones: readonly RoughnessZone[], offset: number): number {
   let k = 0;
@@ -107,11 +222,10 @@ function zoneIndexAt(zones: readonly RoughnessZone[], offset: number): number {
   return k;
 }
 
-/**
- * Build a points section. The spec is assumed valid (createSection in ../index.ts validates it):
- * at least 3 points, offsets non-decreasing, the lowest point below both end points.
- */
+/** Build a points section; throws InputError listing the spec's problems (see pointsSpecProblems). */
 export function points(spec: PointsSpec): PointsSection {
+  const problems = pointsSpecProblems(spec);
+  if (problems.length > 0) throw new InputError(problems);
   const given = spec.points.map(([x, z]) => [x, z] as const);
   const first = given[0]!;
   const last = given[given.length - 1]!;
@@ -160,50 +274,86 @@ export function points(spec: PointsSpec): PointsSection {
   const groups = zones.length + 1; // group 0: the whole section; 1 + k: zone k
   const coef = new Float64Array(intervals * groups * STRIDE);
   const wetZones: number[][] = [];
+
+  // Sweep upward through the levels. Between levels the elements follow the polynomials above; at a level,
+  // segments whose low end lies there start to wet (a flat one at once: T and P jump by its width), and
+  // partly wet segments whose high end lies there become fully wet. s and p are re-summed at each level over
+  // the few partly wet segments (all terms positive: no cancellation); A, Aȳ, T and P grow by positive terms.
+  const segDx = new Float64Array(segments);
+  const segLength = new Float64Array(segments);
+  const segSlope = new Float64Array(segments); // dx/dz: top width gained per unit rise while partly wet
+  const segRate = new Float64Array(segments); // length/dz: perimeter gained per unit rise
+  const segFlat = new Uint8Array(segments);
+  for (let j = 0; j < segments; j++) {
+    const dx = xs[j + 1]! - xs[j]!;
+    const dz = segHigh[j]! - segLow[j]!;
+    const length = Math.sqrt(dx * dx + dz * dz);
+    segDx[j] = dx;
+    segLength[j] = length;
+    segSlope[j] = dx / dz;
+    segRate[j] = length / dz;
+    // a rise too small to divide by (a subnormal difference) is flat
+    segFlat[j] = dz === 0 || !Number.isFinite(segRate[j]!) ? 1 : 0;
+  }
+  const byLow = Array.from({ length: segments }, (_, j) => j).sort((p, q) => segLow[p]! - segLow[q]!);
+  const cur = new Float64Array(groups * STRIDE);
+  const active = new Int32Array(segments);
+  let activeCount = 0;
+  const wetCount = new Int32Array(zones.length);
+  let wetList: number[] = [];
+  let nextLow = 0;
   for (let k = 0; k < intervals; k++) {
     const e = levels[k]!;
-    const wet = new Set<number>();
-    for (let j = 0; j < segments; j++) {
-      const lo = segLow[j]!;
-      if (lo > e) continue; // dry throughout this interval
-      const hi = segHigh[j]!;
-      const dx = xs[j + 1]! - xs[j]!;
-      const dz = hi - lo;
-      const length = Math.hypot(dx, dz);
-      let a: number, t: number, s: number, p0: number, ps: number, m: number;
-      if (hi <= e) {
-        // fully wet: a trapezoid of water over the segment
-        const d0 = e - (zs[j]! - invert);
-        const d1 = e - (zs[j + 1]! - invert);
-        a = 0.5 * dx * (d0 + d1);
-        t = dx;
-        s = 0;
-        p0 = length;
-        ps = 0;
-        m = (dx * (d0 * d0 + d0 * d1 + d1 * d1)) / 6;
-      } else {
-        // partly wet: the water's edge lies on this segment for the whole interval
-        const d = e - lo;
-        const w = (dx * d) / dz;
-        a = 0.5 * w * d;
-        t = w;
-        s = dx / dz;
-        p0 = (length * d) / dz;
-        ps = length / dz;
-        m = (w * d * d) / 6;
+    if (k > 0) {
+      const du = e - levels[k - 1]!;
+      for (let g = 0; g < groups; g++) {
+        const o = g * STRIDE;
+        const a = cur[o + A0]!;
+        const t = cur[o + T0]!;
+        const sl = cur[o + S]!;
+        cur[o + M0] = cur[o + M0]! + du * (a + du * (0.5 * t + (sl * du) / 6));
+        cur[o + A0] = a + du * (t + 0.5 * sl * du);
+        cur[o + T0] = t + sl * du;
+        cur[o + P0] = cur[o + P0]! + cur[o + PS]! * du;
       }
-      for (const g of [0, 1 + segZone[j]!]) {
-        const o = (k * groups + g) * STRIDE;
-        coef[o + A0] = coef[o + A0]! + a;
-        coef[o + T0] = coef[o + T0]! + t;
-        coef[o + S] = coef[o + S]! + s;
-        coef[o + P0] = coef[o + P0]! + p0;
-        coef[o + PS] = coef[o + PS]! + ps;
-        coef[o + M0] = coef[o + M0]! + m;
-      }
-      wet.add(segZone[j]!);
     }
-    wetZones.push([...wet].sort((p, q) => p - q));
+    // partly wet segments topping out at this level are fully wet from here on
+    let kept = 0;
+    for (let i = 0; i < activeCount; i++) {
+      const j = active[i]!;
+      if (segHigh[j]! > e) active[kept++] = j;
+    }
+    activeCount = kept;
+    // segments starting to wet at this level
+    let newlyWet = false;
+    while (nextLow < segments && segLow[byLow[nextLow]!]! <= e) {
+      const j = byLow[nextLow++]!;
+      const zone = segZone[j]!;
+      if (segFlat[j]) {
+        for (const o of [0, (1 + zone) * STRIDE]) {
+          cur[o + T0] = cur[o + T0]! + segDx[j]!;
+          cur[o + P0] = cur[o + P0]! + segLength[j]!;
+        }
+      } else {
+        active[activeCount++] = j;
+      }
+      if (wetCount[zone] === 0) newlyWet = true;
+      wetCount[zone] = wetCount[zone]! + 1;
+    }
+    for (let g = 0; g < groups; g++) cur[g * STRIDE + S] = cur[g * STRIDE + PS] = 0;
+    for (let i = 0; i < activeCount; i++) {
+      const j = active[i]!;
+      for (const o of [0, (1 + segZone[j]!) * STRIDE]) {
+        cur[o + S] = cur[o + S]! + segSlope[j]!;
+        cur[o + PS] = cur[o + PS]! + segRate[j]!;
+      }
+    }
+    if (newlyWet) {
+      wetList = [];
+      for (let z = 0; z < zones.length; z++) if (wetCount[z]! > 0) wetList.push(z);
+    }
+    wetZones.push(wetList);
+    coef.set(cur, k * groups * STRIDE);
   }
 
   const maxDepth = Math.min(first[1], last[1]) - invert;
