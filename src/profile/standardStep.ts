@@ -11,7 +11,8 @@
  * depth error of a step of length h is about h³·|Sf''|/(12·|dE/dy|); the step length is chosen from that
  * estimate (with Sf'' from the last three stations) so the accumulated error stays within a fraction
  * (profileAccuracySafety) of the stretch's tolerance, and a step whose estimate exceeds twice its share is
- * redone at half length. Output stations are always computed stations (no interpolation).
+ * redone at half length. Near critical depth every output station is a computed station; elsewhere one
+ * step may span several output stations, filled by cubic Hermite interpolation (dy/dx from the equation).
  */
 import { NumericalError } from '../core/errors.js';
 import { brentRoot } from '../core/roots.js';
@@ -116,6 +117,12 @@ export function energyStep(spec: StretchSpec, x1: number, s1: PointState, x2: nu
   return solved(y);
 }
 
+function hermite(t: number, y0: number, y1: number, m0: number, m1: number, h: number): number {
+  const t2 = t * t;
+  const t3 = t2 * t;
+  return (2 * t3 - 3 * t2 + 1) * y0 + (t3 - 2 * t2 + t) * h * m0 + (-2 * t3 + 3 * t2) * y1 + (t3 - t2) * h * m1;
+}
+
 /** Estimated local depth error of the step ending at (x3, s3), from Sf at three stations. */
 function localError(x1: number, sf1: number, x2: number, sf2: number, x3: number, s3: PointState): number {
   const h = Math.abs(x3 - x2);
@@ -148,46 +155,74 @@ export function standardStep(spec: StretchSpec): StretchProfile {
   let xPrevious = NaN;
   let steps = 0;
 
-  for (let i = 1; i < stations.length; i++) {
-    const target = stations[i]!;
-    while (direction * (target - x) > 0) {
-      const remaining = direction * (target - x);
-      let dx = h;
-      if (remaining <= dx * 1.05) dx = remaining;
-      const x2 = remaining === dx ? target : x + direction * dx;
-      let guess: number;
-      if (Number.isFinite(yPrevious)) guess = state.depth + ((state.depth - yPrevious) * (x2 - x)) / (x - xPrevious);
-      else {
-        const trend = depthTrend(spec, state);
-        const g = Math.abs(state.dEdy) > nearCriticalBand ? (spec.slope - state.frictionSlope) / state.dEdy : NaN;
-        guess = Number.isFinite(g) ? state.depth + g * (x2 - x) : state.depth + trend * 1e-3 * spec.criticalDepth;
-      }
-      const outcome = energyStep(spec, x, state, x2, guess);
-      if (outcome.stop) return { depths, stop: outcome.stop, steps: steps + 1 };
-      const next = outcome.state!;
-      let factor = stepGrowthLimit;
-      if (Number.isFinite(xb)) {
-        const e = localError(xb, sfb, x, state.frictionSlope, x2, next);
-        const allowed = allowedPerLength * dx;
-        if (e > 2 * allowed && dx > smallest * 2) {
-          h = dx / 2;
-          continue;
-        }
-        factor = e > 0 ? Math.min(stepGrowthLimit, Math.max(0.2, 0.9 * Math.sqrt(allowed / e))) : stepGrowthLimit;
-      }
-      xb = x;
-      sfb = state.frictionSlope;
-      yPrevious = state.depth;
-      xPrevious = x;
-      x = x2;
-      state = next;
-      // a step shortened to land on a station does not shrink the next one
-      h = Math.max(smallest, (remaining === dx ? Math.max(h, dx) : dx) * factor);
-      if (++steps > profileMaxSteps) {
-        throw new NumericalError(`standard step: more than ${profileMaxSteps} steps between stations ${first} and ${target}`);
-      }
+  const lastStation = stations[stations.length - 1]!;
+  const gradient = (st: PointState) => (spec.slope - st.frictionSlope) / st.dEdy;
+  let next = 1;
+  // near critical depth every output station is a computed one; elsewhere a step may span several, which are
+  // filled by cubic Hermite interpolation with dy/dx from the equation at both ends (fourth-order error)
+  let landing = false;
+  while (next < stations.length) {
+    const nearCritical = landing || Math.abs(state.dEdy) < nearCriticalBand;
+    const limit = nearCritical ? stations[next]! : lastStation;
+    const remaining = direction * (limit - x);
+    if (remaining <= 0) {
+      depths.push(state.depth);
+      next++;
+      continue;
     }
-    depths.push(state.depth);
+    let dx = h;
+    if (remaining <= dx * 1.05) dx = remaining;
+    const x2 = remaining === dx ? limit : x + direction * dx;
+    let guess: number;
+    if (Number.isFinite(yPrevious)) guess = state.depth + ((state.depth - yPrevious) * (x2 - x)) / (x - xPrevious);
+    else {
+      const trend = depthTrend(spec, state);
+      const g = Math.abs(state.dEdy) > nearCriticalBand ? gradient(state) : NaN;
+      guess = Number.isFinite(g) ? state.depth + g * (x2 - x) : state.depth + trend * 1e-3 * spec.criticalDepth;
+    }
+    const outcome = energyStep(spec, x, state, x2, guess);
+    const skips = direction * (x2 - stations[next]!) > 0;
+    if (outcome.stop) {
+      if (skips && direction * (outcome.stop.station - stations[next]!) > 0) {
+        // stations lie before the stop: compute them one by one
+        landing = true;
+        continue;
+      }
+      return { depths, stop: outcome.stop, steps: steps + 1 };
+    }
+    const after = outcome.state!;
+    if (skips && Math.abs(after.dEdy) < nearCriticalBand) {
+      landing = true;
+      continue;
+    }
+    let factor = stepGrowthLimit;
+    if (Number.isFinite(xb)) {
+      const e = localError(xb, sfb, x, state.frictionSlope, x2, after);
+      const allowed = allowedPerLength * dx;
+      if (e > 2 * allowed && dx > smallest * 2) {
+        h = dx / 2;
+        continue;
+      }
+      factor = e > 0 ? Math.min(stepGrowthLimit, Math.max(0.2, 0.9 * Math.sqrt(allowed / e))) : stepGrowthLimit;
+    }
+    // fill the output stations this step reached
+    const span = x2 - x;
+    for (; next < stations.length && direction * (stations[next]! - x2) <= 0; next++) {
+      const t = (stations[next]! - x) / span;
+      depths.push(t >= 1 ? after.depth : hermite(t, state.depth, after.depth, gradient(state), gradient(after), span));
+    }
+    xb = x;
+    sfb = state.frictionSlope;
+    yPrevious = state.depth;
+    xPrevious = x;
+    x = x2;
+    state = after;
+    landing = false;
+    // a step shortened to land on a station does not shrink the next one
+    h = Math.max(smallest, (remaining === dx ? Math.max(h, dx) : dx) * factor);
+    if (++steps > profileMaxSteps) {
+      throw new NumericalError(`standard step: more than ${profileMaxSteps} steps from station ${first}`);
+    }
   }
   return { depths, steps };
 }
