@@ -8,17 +8,18 @@
  * 2. assembleProfileInputs: reaches joined upstream to downstream, controls and method per flow.
  * 3. the profile engine computes each flow.
  * 4. results gathered with the model's title, units, method and the cautions.
- * 5. with `compare`, all three methods run and the largest depth difference between them is reported.
+ * 5. with `compare`, all three methods run against a tight-tolerance ODE reference (profile/compare.ts) and the
+ *    largest depth difference of each is reported against the accuracy goal.
  *
  * This module sits above the engine (and results) and below output and the CLI.
  */
-import { accuracyFor } from './core/tolerances.js';
 import { assembleProfileInputs, assembleSections } from './assemble.js';
 import type { HydraulicSection } from './hydraulics/hydraulicSection.js';
 import type { Model } from './input/model/types.js';
 import { computeProfile } from './profile/engine.js';
-import { ProfileMethod, type ProfileInput } from './profile/types.js';
-import type { FlowResult, RunResult } from './results/types.js';
+import { compareMethods } from './profile/compare.js';
+import type { ProfileInput, ProfileMethod } from './profile/types.js';
+import type { RunResult } from './results/types.js';
 import { screeningCaution } from './runSection.js';
 
 export interface RunOptions {
@@ -36,22 +37,31 @@ export interface RunStages {
   readonly inputs: readonly ProfileInput[];
 }
 
-/** The largest depth difference between any two methods for one flow. */
+/** One method against the tight-tolerance ODE reference, for one flow. */
+export interface MethodDifference {
+  method: ProfileMethod;
+  /** largest |depth − reference depth| over the compared output stations */
+  largestDifference: number;
+  /** where it occurs (null when no station could be compared) */
+  station: number | null;
+  /** the accuracy goal there (1 mm SI, 0.003 ft US, or 0.1 % of the depth) */
+  accuracyGoal: number;
+  /** every compared station within its goal */
+  withinGoal: boolean;
+  /** largest shift of a jump toe from the reference's (null without matching jumps) */
+  toeShift: number | null;
+}
+
 export interface FlowComparison {
   id: string;
   largestDifference: number;
-  station: number;
-  between: [ProfileMethod, ProfileMethod];
-  /** the accuracy goal at that station's depth (1 mm SI, 0.003 ft US, or 0.1 % of depth) */
-  accuracyGoal: number;
-  /** true when every compared station lies within its accuracy goal */
   withinGoal: boolean;
-  /** the largest shift of a jump toe between methods (0 without jumps) */
-  largestToeShift: number;
+  methods: MethodDifference[];
 }
 
 export interface MethodComparison {
-  methods: ProfileMethod[];
+  /** what the methods are compared with */
+  reference: string;
   flows: FlowComparison[];
 }
 
@@ -74,93 +84,26 @@ export function runModel(model: Model, options: RunOptions = {}): ModelRun {
     cautions: [screeningCaution],
   };
   const run: ModelRun = { result, stages: { model, sections, inputs } };
-  if (options.compare) run.comparison = compareMethods(inputs, flows, method);
+  if (options.compare) run.comparison = compareAll(inputs);
   return run;
 }
 
-/** Depth at `station` along a computed profile, linear between output stations (null outside it). */
-function depthAt(flow: FlowResult, station: number): number | null {
-  const s = flow.stations;
-  if (s.length === 0) return null;
-  for (let i = 0; i < s.length; i++) {
-    const here = s[i]!;
-    if (here.station === station) return here.depth;
-    const next = s[i + 1];
-    if (next !== undefined && here.station < station && station < next.station) {
-      const t = (station - here.station) / (next.station - here.station);
-      return here.depth + t * (next.depth - here.depth);
-    }
-  }
-  return null;
-}
-
-/** Station intervals around jump toes where depth is discontinuous: compared there, a tiny toe shift looks huge. */
-function jumpWindows(a: FlowResult, b: FlowResult): Array<[number, number]> {
-  const windows: Array<[number, number]> = [];
-  const stations = a.stations.map((s) => s.station);
-  const around = (t: number): [number, number] => {
-    let lo = t;
-    let hi = t;
-    for (const x of stations) {
-      if (x <= t) lo = x;
-      if (x >= t) {
-        hi = x;
-        break;
-      }
-    }
-    return [lo, hi];
-  };
-  const count = Math.max(a.jumps.length, b.jumps.length);
-  for (let i = 0; i < count; i++) {
-    const ta = a.jumps[i]?.station;
-    const tb = b.jumps[i]?.station;
-    const toes = [ta, tb].filter((t): t is number => t !== undefined);
-    const lo = around(Math.min(...toes))[0];
-    const hi = around(Math.max(...toes))[1];
-    windows.push([lo, hi]);
-  }
-  return windows;
-}
-
-function compareMethods(inputs: readonly ProfileInput[], base: readonly FlowResult[], baseMethod: ProfileMethod): MethodComparison {
-  const methods = Object.keys(ProfileMethod) as ProfileMethod[];
-  const runs = new Map<ProfileMethod, readonly FlowResult[]>([[baseMethod, base]]);
-  for (const m of methods) if (!runs.has(m)) runs.set(m, inputs.map((input) => computeProfile({ ...input, method: m })));
-  const flows: FlowComparison[] = inputs.map((input, f) => {
-    const system = input.units.system;
-    const worst: FlowComparison = {
+function compareAll(inputs: readonly ProfileInput[]): MethodComparison {
+  const flows = inputs.map((input): FlowComparison => {
+    const c = compareMethods(input);
+    return {
       id: input.flowId,
-      largestDifference: 0,
-      station: 0,
-      between: [methods[0]!, methods[1]!],
-      accuracyGoal: accuracyFor(system, 0),
-      withinGoal: true,
-      largestToeShift: 0,
+      largestDifference: c.largestDifference,
+      withinGoal: c.withinGoal,
+      methods: c.methods.map((m) => ({
+        method: m.method,
+        largestDifference: m.maxDifference,
+        station: Number.isFinite(m.station) ? m.station : null,
+        accuracyGoal: m.allowed,
+        withinGoal: m.withinGoal,
+        toeShift: m.toeShift,
+      })),
     };
-    for (let a = 0; a < methods.length; a++) {
-      for (let b = a + 1; b < methods.length; b++) {
-        const fa = runs.get(methods[a]!)![f]!;
-        const fb = runs.get(methods[b]!)![f]!;
-        const windows = jumpWindows(fa, fb);
-        for (let j = 0; j < Math.min(fa.jumps.length, fb.jumps.length); j++) {
-          worst.largestToeShift = Math.max(worst.largestToeShift, Math.abs(fa.jumps[j]!.station - fb.jumps[j]!.station));
-        }
-        for (const st of fa.stations) {
-          if (windows.some(([lo, hi]) => st.station >= lo && st.station <= hi)) continue;
-          const other = depthAt(fb, st.station);
-          if (other === null) continue;
-          const diff = Math.abs(st.depth - other);
-          if (diff > accuracyFor(system, st.depth)) worst.withinGoal = false;
-          if (diff > worst.largestDifference) {
-            worst.largestDifference = diff;
-            worst.station = st.station;
-            worst.between = [methods[a]!, methods[b]!];
-            worst.accuracyGoal = accuracyFor(system, st.depth);
-          }
-        }
-      }
-    }
-    return worst;
   });
-  return { methods, flows };
+  return { reference: 'the ODE method at a tight tolerance', flows };
 }

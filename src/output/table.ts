@@ -232,12 +232,21 @@ export function runReport(run: RunResult, comparison?: MethodComparison): string
     for (const w of flow.warnings) parts.push(`warning: ${w}`);
   }
   if (comparison !== undefined) {
-    parts.push('', `method comparison (${comparison.methods.join(', ')}):`);
-    for (const c of comparison.flows) {
+    parts.push('', `method comparison against ${comparison.reference}:`);
+    for (const flow of comparison.flows) {
+      parts.push(`flow ${flow.id}: largest depth difference ${formatSignificant(flow.largestDifference, 3)} ${u.length}, ${flow.withinGoal ? 'within' : 'OUTSIDE'} the accuracy goal`);
       parts.push(
-        `  flow ${c.id}: largest depth difference ${formatSignificant(c.largestDifference, 3)} ${u.length} at station ${formatNumber(c.station, 2)} ` +
-          `(${c.between.join(' vs ')}); ${c.withinGoal ? 'within' : 'OUTSIDE'} the accuracy goal` +
-          (c.largestToeShift > 0 ? `; largest jump-toe shift ${withUnit(c.largestToeShift, u.length, 3)}` : ''),
+        formatTable<MethodComparison['flows'][number]['methods'][number]>(
+          [
+            { header: 'method', value: (m) => m.method, align: 'left' },
+            { header: 'largest difference', unit: u.length, value: (m) => m.largestDifference, decimals: 5 },
+            { header: 'at station', unit: u.length, value: (m) => m.station, decimals: 2 },
+            { header: 'goal there', unit: u.length, value: (m) => m.accuracyGoal, decimals: 4 },
+            { header: 'within goal', value: (m) => m.withinGoal },
+            { header: 'jump-toe shift', unit: u.length, value: (m) => m.toeShift, decimals: 3 },
+          ],
+          flow.methods,
+        ),
       );
     }
   }
