@@ -73,6 +73,7 @@ function solverFor(settings: OdeSettings, span: number): Solver {
 /** The depth where |dE/dy| leaves the band, moving from y in the direction `trend` on the branch. */
 function bandExit(spec: StretchSpec, y: number, trend: number): number {
   const band = (d: number) => Math.abs(stateAt(spec, d).dEdy) - nearCriticalBand;
+  if (band(y) >= 0) return y; // already at the edge (round-off)
   let step = Math.max(Math.abs(y - spec.criticalDepth), spec.criticalDepth * 1e-3);
   let b = y;
   for (let i = 0; i < 80; i++) {
