@@ -175,7 +175,7 @@ export function sectionReport(r: SectionRunResult): string {
 export function runReport(run: RunResult, comparison?: MethodComparison): string {
   const u = unitsOf(run.units);
   const parts: string[] = [];
-  parts.push(`${run.title ?? 'gvf run'} — ${run.units} units (lengths in ${u.length}, discharge in ${u.discharge}), method ${run.method}`);
+  parts.push(`${run.title ?? 'gvf'} — ${run.units} units (lengths in ${u.length}, discharge in ${u.discharge}), method ${run.method}`);
   for (const flow of run.flows) {
     parts.push('', `flow ${flow.id}: discharge ${withUnit(flow.discharge, u.discharge, 3)}`);
     parts.push(

@@ -112,6 +112,24 @@ describe('gvf run MODEL.json', () => {
     expect(existsSync(csv)).toBe(false);
   });
 
+  it('gvf run reports a geometry problem of a section at its JSON path in the model', () => {
+    const dir = scratch();
+    const file = join(dir, 'wall.json');
+    writeFileSync(
+      file,
+      JSON.stringify({
+        units: 'SI',
+        sections: { p: { shape: 'points', points: [[0, 2], [1, 0], [1, 0.5], [1, -1], [3, 2]], n: 0.03 } },
+        reaches: [{ id: 'r', section: 'p', length: 10, slope: 0.001 }],
+        flows: [{ id: 'q', discharge: 1 }],
+      }),
+    );
+    const run = gvf(['run', file]);
+    expect(run.code).toBe(2);
+    expect(run.stderr).toContain(`gvf: ${file} is not a valid model (1 problem):`);
+    expect(run.stderr).toContain('  sections.p.points[3]: ');
+  });
+
   it('gvf run names a JSON syntax error by file, line and column, and a missing file', () => {
     const dir = scratch();
     const file = join(dir, 'cut.json');

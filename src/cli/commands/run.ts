@@ -1,7 +1,9 @@
 /**
  * `gvf run MODEL.json`: validate the model file (every problem with its JSON path), compute every flow, print.
  */
+import { InputError } from '../../core/errors.js';
 import { FlagReader } from '../../input/model/flags.js';
+import { ModelFileError } from '../../input/model/validate.js';
 import { readModelFile } from '../../input/model/parse.js';
 import { MethodName } from '../../input/model/types.js';
 import { runModel } from '../../run.js';
@@ -21,11 +23,18 @@ export async function runCommand(path: string, options: RunOptions, streams: Str
   const step = reader.number('--step', options.step, 'positive', false);
   reader.done();
   const model = readModelFile(path, { force: options.force === true });
-  const run = runModel(model, {
-    ...(method === undefined ? {} : { method }),
-    ...(step === undefined ? {} : { outputSpacing: step }),
-    compare: options.compare === true,
-  });
+  let run;
+  try {
+    run = runModel(model, {
+      ...(method === undefined ? {} : { method }),
+      ...(step === undefined ? {} : { outputSpacing: step }),
+      compare: options.compare === true,
+    });
+  } catch (error) {
+    // problems found while building the model's sections still belong to the model file
+    if (error instanceof InputError && !(error instanceof ModelFileError)) throw new ModelFileError(path, error.problems);
+    throw error;
+  }
   printRun(run, options, streams);
   return exitCode.ok;
 }
