@@ -148,8 +148,10 @@ export function upstreamStart(boundary: Boundary | undefined, end: EndInfo, subc
   const computed = subcriticalDepth === null ? '' : ` (the profile from downstream gives ${show(subcriticalDepth)} there)`;
   if (boundary === undefined) {
     if (subcriticalDepth !== null) return record(null, 'ignored', 'none given; subcritical flow is controlled from downstream');
-    notes.push(`No upstream boundary: critical depth assumed at the upstream end of the steep reach (inflow from a pool), station ${show(station)}.`);
-    return record(yc, 'used', 'none given: critical depth at the entrance of a steep reach assumed');
+    notes.push(
+      `No upstream boundary, and no subcritical profile reaches the upstream end: critical depth assumed there (inflow from a pool), station ${show(station)}.`,
+    );
+    return record(yc, 'used', 'none given: critical depth at the entrance assumed');
   }
   const y = boundaryDepth(boundary, end, 'upstream');
   const what = describe(boundary);

@@ -28,6 +28,7 @@ import {
   type StretchProfile,
   type StretchSpec,
   type StretchStop,
+  atCritical,
   branchSign,
   ceilingDepth,
   depthTrend,
@@ -55,7 +56,9 @@ function targetOf(spec: StretchSpec, y0: number, trend: number): { depth: number
   const between = (v: number) => (trend > 0 ? v > y0 : v < y0);
   const candidates: Array<{ depth: number; kind: Target }> = [];
   if (yn !== null && between(yn)) candidates.push({ depth: yn, kind: 'normal' });
-  if (between(yc)) candidates.push({ depth: yc, kind: 'critical' });
+  // critical depth bounds the branch: moving towards it (even from it) ends there
+  const towardCritical = trend > 0 ? spec.regime === 'supercritical' : spec.regime === 'subcritical';
+  if (towardCritical && (between(yc) || y0 === yc || atCritical(spec, y0))) candidates.push({ depth: yc, kind: 'critical' });
   const top = ceilingDepth(spec);
   if (trend > 0 && Number.isFinite(top)) candidates.push({ depth: top, kind: 'full' });
   if (candidates.length === 0) return { depth: trend > 0 ? Infinity : 0, kind: 'none' };
@@ -76,6 +79,10 @@ function run(spec: StretchSpec, r: number): Path {
   const ys = [state.depth];
   if (trend === 0) return { x: xs, y: ys, settled: state.depth };
   const target = targetOf(spec, state.depth, trend);
+  if (target.kind === 'critical' && atCritical(spec, state.depth)) {
+    // at critical depth and heading out of the branch: there is no profile on this branch
+    return { x: xs, y: ys, stop: { station: x0, depth: spec.criticalDepth, reason: 'critical' } };
+  }
   const evenIncrement = r * Math.abs(target.depth - state.depth);
   let x = x0;
   for (let i = 0; i < profileMaxSteps; i++) {

@@ -54,6 +54,8 @@ interface Entry {
   station: number;
   depth: number;
   piece: number;
+  /** true where no profile reached and critical depth was filled in (with a warning) */
+  filled?: boolean;
 }
 
 export interface EngineOptions {
@@ -389,7 +391,7 @@ export function computeProfile(input: ProfileInput, options: EngineOptions = {})
       // supercritical throughout this piece
       for (let i = 0; i < stations.length; i++) {
         if (i < sup.length) final[p]!.push({ station: stations[i]!, depth: sup[i]!, piece: p });
-        else final[p]!.push({ station: stations[i]!, depth: yc, piece: p });
+        else final[p]!.push({ station: stations[i]!, depth: yc, piece: p, filled: true });
       }
       if (result.stop) {
         stops.push({
@@ -405,6 +407,31 @@ export function computeProfile(input: ProfileInput, options: EngineOptions = {})
       }
       regime = 'super';
       carry = sup.length === stations.length ? sup[sup.length - 1]! : yc;
+      continue;
+    }
+    if (i0 > sup.length) {
+      // the supercritical profile stopped before reaching the subcritical one: no profile covers the gap
+      for (let i = 0; i < stations.length; i++) {
+        const gap = i >= sup.length && i < i0;
+        const depth = i < sup.length ? sup[i]! : gap ? yc : subs[i]!;
+        final[p]!.push(gap ? { station: stations[i]!, depth, piece: p, filled: true } : { station: stations[i]!, depth, piece: p });
+      }
+      warnings.push(
+        `Between stations ${show(result.stop?.station ?? stations[sup.length - 1]!)} and ${show(stations[i0]!)} of reach '${piece.reach.id}' ` +
+          'neither the supercritical profile from upstream (it runs into critical depth) nor the subcritical one from downstream exists: ' +
+          'a control is needed there; depths set to critical depth in the gap.',
+      );
+      if (result.stop) {
+        stops.push({
+          station: result.stop.station,
+          depth: result.stop.depth,
+          reason: result.stop.reason,
+          direction: 'downstream',
+          resolved: false,
+          message: `The supercritical profile from station ${show(stations[0]!)} runs into critical depth at station ${show(result.stop.station)}.`,
+        });
+      }
+      regime = 'sub';
       continue;
     }
     if (result.stop && result.stop.station <= stations[i0]!) {
@@ -483,7 +510,7 @@ export function computeProfile(input: ProfileInput, options: EngineOptions = {})
       const d = subs[i];
       if (d === null || d === undefined) {
         missing = true;
-        final[p]!.push({ station: s, depth: piece.cls.criticalDepth, piece: p });
+        final[p]!.push({ station: s, depth: piece.cls.criticalDepth, piece: p, filled: true });
       } else final[p]!.push({ station: s, depth: d, piece: p });
     });
     if (missing) {
@@ -494,13 +521,13 @@ export function computeProfile(input: ProfileInput, options: EngineOptions = {})
     }
   }
 
-  /* stops: resolved where the final profile does not use the stopped one past its stop */
+  /* stops: resolved where another profile (or a jump) covers the stations beyond the stop */
   for (const stop of stops) {
     if (stop.direction === 'upstream') {
-      const pieceIndex = pieces.findIndex((pc) => stop.station >= pc.from - 1e-9 && stop.station <= pc.to + 1e-9);
-      const entries = final[Math.max(0, pieceIndex)] ?? [];
-      const above = entries.filter((e) => e.station < stop.station);
-      stop.resolved = above.every((e) => e.depth < pieces[e.piece]!.cls.criticalDepth * (1 + 1e-9));
+      const beyond = final.flat().filter((e) => e.station < stop.station && e.station >= stop.station - ctx.totalLength);
+      const pieceIndex = pieces.findIndex((pc) => stop.station >= pc.from && stop.station <= pc.to);
+      const own = beyond.filter((e) => e.piece === pieceIndex);
+      stop.resolved = own.every((e) => !e.filled && e.depth < pieces[e.piece]!.cls.criticalDepth * (1 + 1e-9));
     }
     (stop.resolved ? notes : warnings).push(stop.message);
   }
