@@ -114,7 +114,10 @@ export function assembleProfileInputs(
     reaches,
     discharge: flow.discharge,
     flowId: flow.id,
-    boundaries: { upstream: model.boundaries.upstream, downstream: model.boundaries.downstream },
+    boundaries: {
+      ...(model.boundaries.upstream === undefined ? {} : { upstream: model.boundaries.upstream }),
+      ...(model.boundaries.downstream === undefined ? {} : { downstream: model.boundaries.downstream }),
+    },
     method: options.method ?? model.method,
     frictionAveraging: model.frictionAveraging,
     ...(outputSpacing === undefined ? {} : { outputSpacing }),

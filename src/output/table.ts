@@ -3,7 +3,7 @@
  * A value that does not exist (null, undefined, or a non-finite number) prints as "—", never as NaN.
  */
 import { unitsOf } from '../core/units.js';
-import type { JumpResult, ReachResult, RunResult, StationResult } from '../results/types.js';
+import type { FlowResult, JumpResult, ReachResult, RunResult, StationResult } from '../results/types.js';
 import type { MethodComparison } from '../run.js';
 import type { SectionRunResult, SectionState } from '../runSection.js';
 
@@ -229,6 +229,23 @@ export function runReport(run: RunResult, comparison?: MethodComparison): string
         flow.stations,
       ),
     );
+    if (flow.controls !== undefined && flow.controls.length > 0) {
+      parts.push('', 'controls:');
+      parts.push(
+        formatTable<NonNullable<FlowResult['controls']>[number]>(
+          [
+            { header: 'station', unit: u.length, value: (c) => c.station, decimals: 2 },
+            { header: 'control', value: (c) => c.kind, align: 'left' },
+            { header: 'depth', unit: u.length, value: (c) => c.depth, decimals: 3 },
+            { header: 'status', value: (c) => c.status, align: 'left' },
+            { header: 'why', value: (c) => c.reason, align: 'left' },
+          ],
+          flow.controls,
+        ),
+      );
+    }
+    for (const stop of flow.stops ?? []) if (!stop.resolved) parts.push(`stop: ${stop.message}`);
+    for (const n of flow.notes ?? []) parts.push(`note: ${n}`);
     for (const w of flow.warnings) parts.push(`warning: ${w}`);
   }
   if (comparison !== undefined) {

@@ -162,6 +162,15 @@ describe('gvf profile', () => {
     expect(flow.stations.length).toBeGreaterThanOrEqual(31);
   });
 
+  it('gvf profile explains a control that cannot hold and one the regime does not need', () => {
+    // below critical depth at the end of a mild reach the flow passes through critical depth (Chow 1959 §9-3; theory)
+    const flow = JSON.parse(ok(['profile', ...reach, '--downstream', '0.3', '--upstream', '2', '--json']).stdout).flows[0];
+    expect(flow.warnings.join(' ')).toContain('cannot hold');
+    expect(flow.notes.join(' ')).toContain('ignored');
+    assertInDelta(flow.stations[flow.stations.length - 1].depth, flow.reaches[0].criticalDepth, 1e-9, 'critical depth at the end');
+    expect(flow.reaches[0].profiles.map((p: { type: string }) => p.type)).toEqual(['M2']);
+  });
+
   it('gvf profile refuses a bad control or length, naming the option', () => {
     const bad = gvf(['profile', ...reach.slice(0, -2), '--length', '-5', '--downstream', 'weir']);
     expect(bad.code).toBe(2);

@@ -243,8 +243,8 @@ export function modelFromProfileFlags(flags: ProfileFlags): Model {
     downstreamBedElevation: modelDefaults.downstreamBedElevation,
     flows: [{ id: 'flow', discharge: discharge! }],
     boundaries: {
-      upstream: upstream ?? { ...modelDefaults.boundaries.upstream },
-      downstream: downstream ?? { ...modelDefaults.boundaries.downstream },
+      ...(upstream === undefined ? {} : { upstream }),
+      ...(downstream === undefined ? {} : { downstream }),
     },
     method: method ?? modelDefaults.method,
     frictionAveraging: averaging ?? modelDefaults.frictionAveraging,

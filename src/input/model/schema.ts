@@ -136,9 +136,11 @@ export const modelSchema = z
       .describe('bed elevation at the downstream end of the last reach'),
     flows: z.array(flow).min(1).describe('the flows to compute, one profile each'),
     boundaries: z
-      .strictObject({ upstream: boundary, downstream: boundary })
+      .strictObject({ upstream: boundary.optional(), downstream: boundary.optional() })
       .default({ ...modelDefaults.boundaries })
-      .describe('controls at the two ends; one the flow regime does not need is ignored with a note'),
+      .describe(
+        'controls at the two ends; one the flow regime does not need is ignored with a note; a missing one is assumed (normal depth, or critical depth at a free overfall or pool entrance) with a note',
+      ),
     method,
     frictionAveraging,
     outputSpacing: positive.optional().describe('output spacing along the channel (default at most 1/100 of its length)'),

@@ -96,9 +96,10 @@ export type BoundarySpec =
   | { type: 'critical' };
 export type BoundaryType = BoundarySpec['type'];
 
+/** A missing end is left to the engine, which assumes what the physics suggests and says so in a note. */
 export interface BoundariesSpec {
-  upstream: BoundarySpec;
-  downstream: BoundarySpec;
+  upstream?: BoundarySpec;
+  downstream?: BoundarySpec;
 }
 
 export const MethodName = { 'standard-step': 'standard-step', 'direct-step': 'direct-step', ode: 'ode' } as const;
@@ -124,7 +125,7 @@ export interface Model {
   /** bed elevation at the downstream end of the last reach (default 0) */
   downstreamBedElevation: number;
   flows: FlowSpec[];
-  /** default: normal depth at both ends */
+  /** default: none given (the engine assumes normal or critical depth as the reach demands, with a note) */
   boundaries: BoundariesSpec;
   /** default standard-step */
   method: MethodName;
@@ -137,7 +138,7 @@ export interface Model {
 /** Defaults filled in by validation; named here so README, schema and code agree. */
 export const modelDefaults = {
   downstreamBedElevation: 0,
-  boundaries: { upstream: { type: 'normal' }, downstream: { type: 'normal' } },
+  boundaries: {},
   method: 'standard-step',
   frictionAveraging: 'conveyance',
 } as const satisfies Partial<Model>;

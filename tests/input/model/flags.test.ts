@@ -67,13 +67,13 @@ describe('sectionFromFlags(reader, flags)', () => {
 describe('modelFromProfileFlags(flags)', () => {
   const flags = { shape: 'rectangular', bottomWidth: '4', n: '0.015', slope: '0.001', discharge: '6', length: '500' };
 
-  it('modelFromProfileFlags(flags) makes a one-reach model with normal depth at both ends by default', () => {
+  it('modelFromProfileFlags(flags) makes a one-reach model, leaving an end without a flag to the engine', () => {
     const model = modelFromProfileFlags({ ...flags, downstream: '2.2', step: '10', units: 'US' });
     expect(model).toMatchObject({
       units: 'US',
       reaches: [{ id: 'reach', section: 'channel', length: 500, slope: 0.001 }],
       flows: [{ id: 'flow', discharge: 6 }],
-      boundaries: { upstream: { type: 'normal' }, downstream: { type: 'depth', depth: 2.2 } },
+      boundaries: { downstream: { type: 'depth', depth: 2.2 } },
       method: 'standard-step',
       outputSpacing: 10,
     });

@@ -55,7 +55,7 @@ describe('validateModel(json, file)', () => {
     delete bare.method;
     delete bare.downstreamBedElevation;
     const filled = validateModel(bare, 'model.json');
-    expect(filled.boundaries).toEqual({ upstream: { type: 'normal' }, downstream: { type: 'normal' } });
+    expect(filled.boundaries).toEqual({});
     expect(filled.method).toBe('standard-step');
     expect(filled.downstreamBedElevation).toBe(0);
   });
