@@ -90,3 +90,5 @@ export const colebrookWhiteTolerance = 1e-12;
  *  this fraction of Q is a jump of conveyance (the wetted perimeter of a flat floodplain appearing at once
  *  in a section of one roughness), not a normal depth. */
 export const conveyanceJumpFraction = 1e-6;
+/** Profile: the standard step solves each step's depth to this fraction of the accuracy goal (Brent's x tolerance). */
+export const energyStepDepthFraction = 1e-5;

@@ -18,6 +18,7 @@ import { NumericalError } from '../core/errors.js';
 import { brentRoot } from '../core/roots.js';
 import {
   criticalStartStepFraction,
+  energyStepDepthFraction,
   firstStepFraction,
   nearCriticalBand,
   nearCriticalFloor,
@@ -58,7 +59,7 @@ export function energyStep(spec: StretchSpec, x1: number, s1: PointState, x2: nu
     return residualOf(last);
   };
   const solved = (y: number): StepOutcome => ({ state: last !== undefined && last.depth === y ? last : stateAt(spec, y) });
-  const xTolerance = spec.tolerance * 1e-5;
+  const xTolerance = spec.tolerance * energyStepDepthFraction;
   const subcritical = spec.regime === 'subcritical';
   const branchLow = subcritical ? yc : floorDepth(spec);
   const branchHigh = subcritical ? ceilingDepth(spec) : yc;

@@ -1,0 +1,110 @@
+/**
+ * The standard step (Chow 1959 §10-3; Henderson 1966 §4.4; published method): each step balances the energy
+ * equation z2 + E2 = z1 + E1 − S̄f·(x2 − x1) to the root finder's tolerance; where no depth on the branch
+ * balances it, the step ends exactly where critical depth does.
+ */
+import { describe, expect, it } from 'vitest';
+import { accuracyFor, energyStepDepthFraction } from '../../src/core/tolerances.js';
+import { SI } from '../../src/core/units.js';
+import { circular } from '../../src/geometry/shapes/circular.js';
+import { criticalDepth } from '../../src/hydraulics/criticalDepth.js';
+import { hydraulicSection } from '../../src/hydraulics/hydraulicSection.js';
+import { normalDepth } from '../../src/hydraulics/normalDepth.js';
+import { computeProfile } from '../../src/profile/engine.js';
+import { pointState } from '../../src/profile/energy.js';
+import { meanFrictionSlope } from '../../src/profile/frictionMean.js';
+import { energyStep, standardStep } from '../../src/profile/standardStep.js';
+import type { StretchSpec } from '../../src/profile/stretch.js';
+import type { FrictionAveraging } from '../../src/profile/types.js';
+import { assertInDelta, assertRelative } from '../helpers/assert.js';
+import { rect5, rect5Discharge } from './channels.js';
+
+const q = rect5Discharge;
+const yc = criticalDepth(rect5, q);
+
+function spec(slope: number, regime: 'subcritical' | 'supercritical', startDepth: number, averaging: FrictionAveraging = 'conveyance'): StretchSpec {
+  return {
+    hs: rect5,
+    slope,
+    discharge: q,
+    stations: regime === 'subcritical' ? [1000, 0] : [0, 1000],
+    startDepth,
+    regime,
+    criticalDepth: yc,
+    normalDepth: normalDepth(rect5, q, slope),
+    averaging,
+    tolerance: accuracyFor('SI', yc),
+  };
+}
+
+const residual = (s: StretchSpec, x1: number, y1: number, x2: number, y2: number) => {
+  const a = pointState(rect5, y1, q);
+  const b = pointState(rect5, y2, q);
+  return b.energy - a.energy - s.slope * (x2 - x1) + meanFrictionSlope(s.averaging, a, b, q) * (x2 - x1);
+};
+
+describe('energyStep', () => {
+  for (const averaging of ['conveyance', 'arithmetic', 'geometric', 'harmonic'] as const) {
+    it(`energyStep (${averaging} mean): the depth found balances the energy equation to the solver tolerance`, () => {
+      // depth solved to energyStepDepthFraction of the goal; the residual changes with depth at about |dE/dy| (+ friction)
+      const bound = (y: number) => 2 * energyStepDepthFraction * accuracyFor('SI', yc) * Math.max(1, Math.abs(pointState(rect5, y, q).dEdy));
+      const sub = spec(0.0005, 'subcritical', 3, averaging);
+      const up = energyStep(sub, 1000, pointState(rect5, 3, q), 950);
+      expect(up.state!.depth).toBeGreaterThan(yc);
+      expect(Math.abs(residual(sub, 1000, 3, 950, up.state!.depth))).toBeLessThan(bound(up.state!.depth));
+      const sup = spec(0.0005, 'supercritical', 0.5, averaging);
+      const down = energyStep(sup, 0, pointState(rect5, 0.5, q), 5);
+      expect(down.state!.depth).toBeLessThan(yc);
+      expect(Math.abs(residual(sup, 0, 0.5, 5, down.state!.depth))).toBeLessThan(bound(down.state!.depth));
+    });
+  }
+
+  it('energyStep: where no subcritical depth balances the step (S1 near critical), it stops where critical depth does, exactly', () => {
+    const s = spec(0.02, 'subcritical', 1.2);
+    const outcome = energyStep(s, 1000, pointState(rect5, 1.2, q), 900);
+    expect(outcome.stop).toBeDefined();
+    const at = outcome.stop!.station;
+    expect(at).toBeLessThan(1000);
+    expect(at).toBeGreaterThan(900);
+    assertInDelta(outcome.stop!.depth, yc, 0);
+    expect(Math.abs(residual(s, 1000, 1.2, at, yc))).toBeLessThan(1e-12);
+  });
+});
+
+describe('meanFrictionSlope (the four means of Chow 1959 §10-3; common practice)', () => {
+  it('meanFrictionSlope: average conveyance, arithmetic, geometric and harmonic means of Sf', () => {
+    const a = pointState(rect5, 2, q);
+    const b = pointState(rect5, 2.5, q);
+    assertRelative(meanFrictionSlope('conveyance', a, b, q), (q / ((a.conveyance + b.conveyance) / 2)) ** 2, 1e-14);
+    assertRelative(meanFrictionSlope('arithmetic', a, b, q), (a.frictionSlope + b.frictionSlope) / 2, 1e-14);
+    assertRelative(meanFrictionSlope('geometric', a, b, q), Math.sqrt(a.frictionSlope * b.frictionSlope), 1e-14);
+    assertRelative(meanFrictionSlope('harmonic', a, b, q), 2 / (1 / a.frictionSlope + 1 / b.frictionSlope), 1e-14);
+  });
+});
+
+describe('standardStep', () => {
+  it('standardStep: an S1 from a tailwater runs into critical depth and stops there, all depths on the branch', () => {
+    const s = spec(0.02, 'subcritical', 2.5);
+    const profile = standardStep({ ...s, stations: Array.from({ length: 101 }, (_, i) => 1000 - 10 * i) });
+    expect(profile.stop?.reason).toBe('critical');
+    expect(profile.depths.length).toBeLessThan(101);
+    expect(profile.depths.every((d) => d > yc && d <= 2.5)).toBe(true);
+  });
+
+  it('computeProfile: a part-full pipe whose backwater reaches the crown stops there and says the conduit flows full', () => {
+    const pipe = hydraulicSection(circular({ diameter: 1.2, roughness: 0.013 }), 'manning', SI);
+    const r = computeProfile({
+      units: SI,
+      reaches: [{ id: 'barrel', section: pipe, length: 300, slope: 0.001 }],
+      discharge: 1.5,
+      flowId: 'pipe',
+      boundaries: { downstream: { type: 'depth', depth: 1.15 } },
+      method: 'standard-step',
+    });
+    const full = r.stops!.find((s) => s.reason === 'full')!;
+    expect(full.station).toBeGreaterThan(0);
+    expect(full.resolved).toBe(false);
+    expect(r.warnings.join(' ')).toMatch(/flows full/);
+    expect(r.stations.every((s) => Number.isFinite(s.depth) && s.depth > 0 && s.depth <= 1.2)).toBe(true);
+  });
+});
