@@ -32,20 +32,30 @@ import { pointState } from './energy.js';
 import { jumpAt, locateToe } from './jump.js';
 import { integrators, referenceIntegrator } from './methods.js';
 import type { FlowRegime, ProfileIntegrator, StretchProfile, StretchSpec } from './stretch.js';
-import type { ControlResponse, InternalControl, PrismaticReachInput, ProfileInput } from './types.js';
+import type { ControlResponse, InternalControl, ProfileInput, ReachInput, SurveyNode } from './types.js';
+import { surveyedStretch } from './surveyed.js';
+import { normalDepth as normalDepthOf } from '../hydraulics/normalDepth.js';
+import { classifySlope } from '../hydraulics/slopeClass.js';
+import { criticalDepth as criticalDepthOf } from '../hydraulics/criticalDepth.js';
 
-/** A prismatic stretch of one reach between junctions (reach breaks or internal controls). */
+/** A stretch of one reach between junctions (reach breaks or internal controls): prismatic, or a surveyed reach. */
 interface Piece {
   readonly index: number;
   readonly reachIndex: number;
-  readonly reach: PrismaticReachInput;
+  readonly reach: ReachInput;
   readonly cls: ReachClass;
   readonly from: number;
   readonly to: number;
-  /** ascending, from … to */
+  /** ascending, from … to (the nodes of a surveyed reach) */
   readonly stations: number[];
+  /** prismatic: the section and slope; surveyed: the first node's section and the mean bed slope */
+  readonly section: HydraulicSection;
+  readonly slope: number;
   /** bed elevation at `to` */
   readonly bedAtEnd: number;
+  /** surveyed reaches: the nodes (one per station) and their critical depths */
+  readonly nodes?: readonly SurveyNode[];
+  readonly criticals?: readonly number[];
   /** the control at the downstream end of this piece, if any */
   readonly control?: InternalControl;
 }
@@ -82,7 +92,17 @@ function validate(input: ProfileInput): void {
   if (input.reaches.length === 0) problems.push({ where: 'reaches', message: 'at least one reach is needed', value: input.reaches });
   input.reaches.forEach((reach, i) => {
     if (reach.kind === 'surveyed') {
-      problems.push({ where: `reaches[${i}]`, message: 'surveyed reaches are not handled by this engine version; describe the reach as prismatic', value: reach.id });
+      const nodes = reach.nodes;
+      if (nodes.length < 2) problems.push({ where: `reaches[${i}].nodes`, message: 'a surveyed reach needs at least two sections', value: nodes.length });
+      nodes.forEach((n, j) => {
+        if (!Number.isFinite(n.station) || (j > 0 && !(n.station > nodes[j - 1]!.station))) {
+          problems.push({ where: `reaches[${i}].nodes[${j}].station`, message: 'stations must be finite and increase downstream', value: n.station });
+        }
+        if (!Number.isFinite(n.bedElevation)) problems.push({ where: `reaches[${i}].nodes[${j}].bedElevation`, message: 'the bed elevation must be a finite number', value: n.bedElevation });
+        if (n.reachLength !== undefined && !(Number.isFinite(n.reachLength) && n.reachLength > 0)) {
+          problems.push({ where: `reaches[${i}].nodes[${j}].reachLength`, message: 'the flow length must be a number > 0', value: n.reachLength });
+        }
+      });
       return;
     }
     if (!(Number.isFinite(reach.length) && reach.length > 0)) {
@@ -99,26 +119,43 @@ function validate(input: ProfileInput): void {
   if (problems.length > 0) throw new InputError(problems);
 }
 
+function reachLength(reach: ReachInput): number {
+  return reach.kind === 'surveyed' ? reach.nodes[reach.nodes.length - 1]!.station - reach.nodes[0]!.station : reach.length;
+}
+
 function layout(input: ProfileInput, classes: ReachClass[]): Piece[] {
-  const reaches = input.reaches as PrismaticReachInput[];
-  const total = reaches.reduce((sum, r) => sum + r.length, 0);
+  const reaches = input.reaches;
+  const q = input.discharge;
+  // reach extents: surveyed reaches keep their own stations, and must join the reach above
+  const starts: number[] = [];
+  let x = reaches[0]!.kind === 'surveyed' ? reaches[0]!.nodes[0]!.station : 0;
+  const origin = x;
+  reaches.forEach((r, k) => {
+    if (r.kind === 'surveyed' && Math.abs(r.nodes[0]!.station - x) > 1e-9 * Math.max(1, Math.abs(x))) {
+      throw new InputError({
+        where: `reaches[${k}].nodes[0].station`,
+        message: `a surveyed reach must start where the reach above ends (station ${show(x)})`,
+        value: r.nodes[0]!.station,
+      });
+    }
+    starts.push(x);
+    x += reachLength(r);
+  });
+  const end = x;
+  const total = end - origin;
   const spacing = input.outputSpacing ?? total / defaultOutputIntervals;
   const merge = total * 1e-9;
   const controls = [...(input.controls ?? [])].sort((a, b) => a.station - b.station);
   controls.forEach((c, i) => {
-    if (!(Number.isFinite(c.station) && c.station > merge && c.station < total - merge)) {
-      throw new InputError({ where: `controls[${i}].station`, message: `an internal control must lie inside the channel (0 to ${show(total)})`, value: c.station });
+    if (!(Number.isFinite(c.station) && c.station > origin + merge && c.station < end - merge)) {
+      throw new InputError({ where: `controls[${i}].station`, message: `an internal control must lie inside the channel (${show(origin)} to ${show(end)})`, value: c.station });
+    }
+    const k = starts.findIndex((s0, j) => c.station > s0 + merge && c.station < s0 + reachLength(reaches[j]!) - merge);
+    if (k >= 0 && reaches[k]!.kind === 'surveyed') {
+      throw new InputError({ where: `controls[${i}].station`, message: 'an internal control inside a surveyed reach must sit at a reach end; split the reach there', value: c.station });
     }
   });
-  const extra = (input.extraStations ?? []).filter((s) => Number.isFinite(s) && s >= 0 && s <= total);
-
-  // reach extents and beds (from the downstream end up)
-  const starts: number[] = [];
-  let x = 0;
-  for (const r of reaches) {
-    starts.push(x);
-    x += r.length;
-  }
+  const extra = (input.extraStations ?? []).filter((s) => Number.isFinite(s) && s >= origin && s <= end);
 
   const pieces: Piece[] = [];
   let bedBelow = input.downstreamBedElevation ?? 0;
@@ -126,10 +163,32 @@ function layout(input: ProfileInput, classes: ReachClass[]): Piece[] {
   for (let k = reaches.length - 1; k >= 0; k--) {
     const reach = reaches[k]!;
     const from = starts[k]!;
-    const to = from + reach.length;
-    const n = Math.max(1, Math.ceil(reach.length / spacing - 1e-9));
+    const length = reachLength(reach);
+    const to = from + length;
+    const atEnd = controls.find((c) => Math.abs(c.station - to) <= merge);
+    if (reach.kind === 'surveyed') {
+      const nodes = reach.nodes;
+      const last = nodes[nodes.length - 1]!;
+      reversed.push({
+        reachIndex: k,
+        reach,
+        cls: classes[k]!,
+        from,
+        to,
+        stations: nodes.map((n) => n.station),
+        section: nodes[0]!.section,
+        slope: (nodes[0]!.bedElevation - last.bedElevation) / length,
+        bedAtEnd: last.bedElevation,
+        nodes,
+        criticals: nodes.map((n) => criticalDepthOf(n.section, q)),
+        ...(atEnd ? { control: atEnd } : {}),
+      });
+      bedBelow = nodes[0]!.bedElevation;
+      continue;
+    }
+    const n = Math.max(1, Math.ceil(length / spacing - 1e-9));
     const grid: number[] = [];
-    for (let i = 0; i <= n; i++) grid.push(i === n ? to : from + (reach.length * i) / n);
+    for (let i = 0; i <= n; i++) grid.push(i === n ? to : from + (length * i) / n);
     for (const s of extra) if (s > from && s < to) grid.push(s);
     const inside = controls.filter((c) => c.station > from + merge && c.station < to - merge);
     for (const c of inside) grid.push(c.station);
@@ -139,7 +198,6 @@ function layout(input: ProfileInput, classes: ReachClass[]): Piece[] {
     stations[stations.length - 1] = to;
     // split at controls inside the reach, walking down from the reach's downstream end
     const cuts = [from, ...inside.map((c) => c.station), to];
-    const atEnd = controls.find((c) => Math.abs(c.station - to) <= merge);
     for (let j = cuts.length - 2; j >= 0; j--) {
       const a = cuts[j]!;
       const b = cuts[j + 1]!;
@@ -152,6 +210,8 @@ function layout(input: ProfileInput, classes: ReachClass[]): Piece[] {
         from: a,
         to: b,
         stations: stations.filter((s) => s >= a - merge && s <= b + merge),
+        section: reach.section,
+        slope: reach.slope,
         bedAtEnd,
         ...(control ? { control } : {}),
       });
@@ -159,18 +219,62 @@ function layout(input: ProfileInput, classes: ReachClass[]): Piece[] {
     }
   }
   reversed.reverse().forEach((p, index) => pieces.push({ ...p, index }));
-  // the last piece's downstream end is the channel end: no control there
   return pieces;
 }
 
+/** The station where the piece's reach starts. */
+function reachStart(piece: Piece): number {
+  return piece.nodes ? piece.nodes[0]!.station : piece.from;
+}
+
 function bedAt(piece: Piece, station: number): number {
-  return piece.bedAtEnd + piece.reach.slope * (piece.to - station);
+  if (piece.nodes) {
+    const nodes = piece.nodes;
+    let j = 0;
+    while (j < nodes.length - 2 && nodes[j + 1]!.station < station) j++;
+    const a = nodes[j]!;
+    const b = nodes[j + 1]!;
+    return a.bedElevation + ((b.bedElevation - a.bedElevation) * (station - a.station)) / (b.station - a.station);
+  }
+  return piece.bedAtEnd + piece.slope * (piece.to - station);
+}
+
+/** The section at a station of a piece (a surveyed reach: the nearest node's). */
+function sectionAt(piece: Piece, station: number): HydraulicSection {
+  if (!piece.nodes) return piece.section;
+  let best = 0;
+  piece.nodes.forEach((n, j) => {
+    if (Math.abs(n.station - station) < Math.abs(piece.nodes![best]!.station - station)) best = j;
+  });
+  return piece.nodes[best]!.section;
+}
+
+function criticalAt(piece: Piece, station: number): number {
+  if (!piece.criticals) return piece.cls.criticalDepth;
+  let best = 0;
+  piece.nodes!.forEach((n, j) => {
+    if (Math.abs(n.station - station) < Math.abs(piece.nodes![best]!.station - station)) best = j;
+  });
+  return piece.criticals[best]!;
+}
+
+/** The class at one end of a piece: a surveyed reach uses the end section with the slope of the end interval. */
+function endClass(piece: Piece, end: 'upstream' | 'downstream', discharge: number): ReachClass {
+  if (!piece.nodes) return piece.cls;
+  const nodes = piece.nodes;
+  const j = end === 'upstream' ? 0 : nodes.length - 2;
+  const slope = (nodes[j]!.bedElevation - nodes[j + 1]!.bedElevation) / (nodes[j + 1]!.station - nodes[j]!.station);
+  const node = end === 'upstream' ? nodes[0]! : nodes[nodes.length - 1]!;
+  const yc = piece.criticals![end === 'upstream' ? 0 : nodes.length - 1]!;
+  const yn = slope > 0 ? normalDepthOf(node.section, discharge, slope) : null;
+  return { normalDepth: yn, criticalDepth: yc, slopeClass: classifySlope(slope, yn, yc) };
 }
 
 /* ---------- the integrations ---------- */
 
 interface Context {
   readonly input: ProfileInput;
+  readonly warnings: string[];
   readonly integrate: ProfileIntegrator;
   readonly refinement: number;
   readonly totalLength: number;
@@ -181,8 +285,8 @@ function stretchSpec(ctx: Context, piece: Piece, stations: number[], startDepth:
   const cls = piece.cls;
   const tolerance = accuracyFor(ctx.input.units.system, Math.min(startDepth, cls.criticalDepth)) / (ctx.refinement * ctx.refinement);
   return {
-    hs: piece.reach.section,
-    slope: piece.reach.slope,
+    hs: piece.section,
+    slope: piece.slope,
     discharge: ctx.input.discharge,
     stations,
     startDepth,
@@ -201,11 +305,40 @@ function run(ctx: Context, spec: StretchSpec): StretchProfile {
   return result;
 }
 
+/**
+ * One profile through a piece: the chosen method on a prismatic piece, the node-to-node standard step on a
+ * surveyed one (stations set to critical depth there are reported in `ctx.warnings`).
+ */
+function integratePiece(ctx: Context, piece: Piece, stations: number[], startDepth: number, regime: FlowRegime): StretchProfile {
+  if (!piece.nodes) return run(ctx, stretchSpec(ctx, piece, stations, startDepth, regime));
+  const order = stations.map((x) => piece.stations.indexOf(x));
+  const system = ctx.input.units.system;
+  const refinement = ctx.refinement;
+  const result = surveyedStretch(
+    piece.nodes,
+    piece.criticals!,
+    order,
+    startDepth,
+    regime,
+    ctx.input.discharge,
+    ctx.input.frictionAveraging ?? 'conveyance',
+    (j) => accuracyFor(system, piece.criticals![j]!) / (refinement * refinement),
+  );
+  ctx.steps += result.steps;
+  for (const j of result.setToCritical) {
+    ctx.warnings.push(
+      `Station ${show(piece.stations[j]!)} of surveyed reach '${piece.reach.id}': no ${regime} depth balances the energy equation from the neighbouring section; ` +
+        'set to critical depth (as careful practice does). Check the survey spacing or a control there.',
+    );
+  }
+  return { depths: result.depths, steps: result.steps };
+}
+
 /** The depth at station x, integrating from (x0, y0) over one short stretch; critical depth where the profile stops first. */
 function depthAt(ctx: Context, piece: Piece, x0: number, y0: number, x: number, regime: FlowRegime): number {
   if (x === x0) return y0;
   const result = run(ctx, stretchSpec(ctx, piece, [x0, x], y0, regime));
-  return result.depths.length === 2 ? result.depths[1]! : piece.cls.criticalDepth;
+  return result.depths.length === 2 ? result.depths[1]! : criticalAt(piece, x);
 }
 
 function force(hs: HydraulicSection, depth: number, discharge: number): number {
@@ -217,17 +350,22 @@ function force(hs: HydraulicSection, depth: number, discharge: number): number {
 export function computeProfile(input: ProfileInput, options: EngineOptions = {}): FlowResult {
   validate(input);
   const q = input.discharge;
-  const reaches = input.reaches as PrismaticReachInput[];
-  const classes = reaches.map((r) => classifyReach(r.section, q, r.slope));
+  const reaches = input.reaches;
+  const classes = reaches.map((r) =>
+    r.kind === 'surveyed'
+      ? classifyReach(r.nodes[0]!.section, q, (r.nodes[0]!.bedElevation - r.nodes[r.nodes.length - 1]!.bedElevation) / reachLength(r))
+      : classifyReach(r.section, q, r.slope),
+  );
+  const warnings: string[] = [];
   const pieces = layout(input, classes);
   const ctx: Context = {
     input,
+    warnings,
     integrate: options.reference ? referenceIntegrator : integrators[input.method],
     refinement: input.refinement ?? 1,
-    totalLength: reaches.reduce((s, r) => s + r.length, 0),
+    totalLength: reaches.reduce((s, r) => s + reachLength(r), 0),
     steps: 0,
   };
-  const warnings: string[] = [];
   const notes: string[] = [];
   const controls: ControlRecord[] = [];
   const stops: ProfileStop[] = [];
@@ -235,11 +373,16 @@ export function computeProfile(input: ProfileInput, options: EngineOptions = {})
   const jumps: JumpResult[] = [];
   const last = pieces.length - 1;
   const endInfo = (p: Piece, station: number): EndInfo => ({
-    reach: p.cls,
+    reach: endClass(p, station === p.from ? 'upstream' : 'downstream', q),
     bedElevation: bedAt(p, station),
     station,
-    maxDepth: p.reach.section.section.maxDepth,
+    maxDepth: sectionAt(p, station).section.maxDepth,
     show,
+  });
+  pieces.forEach((p) => {
+    if (p.nodes && input.method !== 'standard-step' && !options.reference && p.from === reachStart(p)) {
+      notes.push(`Surveyed reach '${p.reach.id}' is computed by the standard step node to node (the ${input.method} method needs prismatic reaches).`);
+    }
   });
 
   /* 3. subcritical sweep */
@@ -256,7 +399,7 @@ export function computeProfile(input: ProfileInput, options: EngineOptions = {})
       notes.push(...ds.notes);
       warnings.push(...ds.warnings);
       start = ds.depth;
-      downstreamHeld = ds.depth !== null && ds.depth > piece.cls.criticalDepth;
+      downstreamHeld = ds.depth !== null && ds.depth > criticalAt(piece, piece.to);
     } else if (piece.control) {
       const below = pieces[p + 1]!;
       const tail = sub[p + 1]![0] ?? null;
@@ -264,8 +407,8 @@ export function computeProfile(input: ProfileInput, options: EngineOptions = {})
         discharge: q,
         units: input.units,
         station: piece.to,
-        upstreamSection: piece.reach.section,
-        downstreamSection: below.reach.section,
+        upstreamSection: sectionAt(piece, piece.to),
+        downstreamSection: sectionAt(below, below.from),
         upstreamBedElevation: bedAt(piece, piece.to),
         downstreamBedElevation: bedAt(below, below.from),
         tailwaterDepth: tail,
@@ -274,7 +417,7 @@ export function computeProfile(input: ProfileInput, options: EngineOptions = {})
       if (response.result) structures.push(response.result);
       if (response.notes) notes.push(...response.notes);
       let y = response.upstreamDepth;
-      const yc = piece.cls.criticalDepth;
+      const yc = criticalAt(piece, piece.to);
       if (!(Number.isFinite(y) && y > 0)) {
         warnings.push(`The ${piece.control.kind} '${piece.control.id}' at station ${show(piece.to)} gave no usable headwater (${y}); critical depth used.`);
         y = yc;
@@ -294,13 +437,13 @@ export function computeProfile(input: ProfileInput, options: EngineOptions = {})
       });
       start = y;
     } else {
-      const b = breakStart(piece.cls, sub[p + 1]![0] ?? null);
+      const b = breakStart(endClass(piece, 'downstream', q), sub[p + 1]![0] ?? null);
       start = b.depth;
       criticalBelow[p] = b.critical;
     }
     if (start === null) continue;
     const order = [...piece.stations].reverse();
-    const result = run(ctx, stretchSpec(ctx, piece, order, start, 'subcritical'));
+    const result = integratePiece(ctx, piece, order, start, 'subcritical');
     const n = piece.stations.length;
     result.depths.forEach((d, k) => (sub[p]![n - 1 - k] = d));
     if (result.stop) {
@@ -327,7 +470,7 @@ export function computeProfile(input: ProfileInput, options: EngineOptions = {})
     const piece = pieces[p]!;
     const subs = sub[p]!;
     const stations = piece.stations;
-    const yc = piece.cls.criticalDepth;
+    const yc = criticalAt(piece, piece.from);
     let ys: number | null = null;
     let startKind = '';
     if (p === 0) {
@@ -371,14 +514,15 @@ export function computeProfile(input: ProfileInput, options: EngineOptions = {})
       fillSubcritical(p);
       continue;
     }
-    const result = run(ctx, stretchSpec(ctx, piece, [...stations], ys, 'supercritical'));
+    const result = integratePiece(ctx, piece, [...stations], ys, 'supercritical');
     const sup = result.depths;
     const wins = (i: number): boolean => {
       const s = subs[i];
       if (s === null || s === undefined) return false;
       if (i >= sup.length) return true;
       // strictly greater: two profiles meeting at critical depth (a critical slope) join without a jump
-      return force(piece.reach.section, s, q) > force(piece.reach.section, sup[i]!, q) * (1 + 1e-9);
+      const hsi = sectionAt(piece, stations[i]!);
+      return force(hsi, s, q) > force(hsi, sup[i]!, q) * (1 + 1e-9);
     };
     let i0 = -1;
     for (let i = 0; i < stations.length; i++) {
@@ -391,7 +535,7 @@ export function computeProfile(input: ProfileInput, options: EngineOptions = {})
       // supercritical throughout this piece
       for (let i = 0; i < stations.length; i++) {
         if (i < sup.length) final[p]!.push({ station: stations[i]!, depth: sup[i]!, piece: p });
-        else final[p]!.push({ station: stations[i]!, depth: yc, piece: p, filled: true });
+        else final[p]!.push({ station: stations[i]!, depth: criticalAt(piece, stations[i]!), piece: p, filled: true });
       }
       if (result.stop) {
         stops.push({
@@ -413,7 +557,7 @@ export function computeProfile(input: ProfileInput, options: EngineOptions = {})
       // the supercritical profile stopped before reaching the subcritical one: no profile covers the gap
       for (let i = 0; i < stations.length; i++) {
         const gap = i >= sup.length && i < i0;
-        const depth = i < sup.length ? sup[i]! : gap ? yc : subs[i]!;
+        const depth = i < sup.length ? sup[i]! : gap ? criticalAt(piece, stations[i]!) : subs[i]!;
         final[p]!.push(gap ? { station: stations[i]!, depth, piece: p, filled: true } : { station: stations[i]!, depth, piece: p });
       }
       warnings.push(
@@ -464,7 +608,7 @@ export function computeProfile(input: ProfileInput, options: EngineOptions = {})
       }
       // a jump exactly at the break
       const y2 = subs[0]!;
-      jumps.push({ ...jumpAt(piece.reach.section, piece.reach.section, q, atStart, ys, y2), atControl: true });
+      jumps.push({ ...jumpAt(sectionAt(piece, atStart), sectionAt(piece, atStart), q, atStart, ys, y2), atControl: true });
       final[p]!.push({ station: atStart, depth: ys, piece: p });
       regime = 'sub';
       fillSubcritical(p);
@@ -475,12 +619,27 @@ export function computeProfile(input: ProfileInput, options: EngineOptions = {})
     const xb = stations[i0]!;
     const ya = sup[i0 - 1]!;
     const yb = subs[i0]!;
-    const hs = piece.reach.section;
-    const difference = (x: number) =>
-      force(hs, depthAt(ctx, piece, xa, ya, x, 'supercritical'), q) - force(hs, depthAt(ctx, piece, xb, yb, x, 'subcritical'), q);
-    const toe = locateToe(difference, xa, xb, jumpToeTolerance * ctx.totalLength);
-    const y1 = depthAt(ctx, piece, xa, ya, toe, 'supercritical');
-    const y2 = depthAt(ctx, piece, xb, yb, toe, 'subcritical');
+    let toe: number;
+    let y1: number;
+    let y2: number;
+    let hs: HydraulicSection;
+    if (piece.nodes) {
+      // between surveyed sections: where the linearly interpolated specific-force difference vanishes
+      const da = force(sectionAt(piece, xa), ya, q) - force(sectionAt(piece, xa), subs[i0 - 1] ?? criticalAt(piece, xa), q);
+      const db = force(sectionAt(piece, xb), i0 < sup.length ? sup[i0]! : criticalAt(piece, xb), q) - force(sectionAt(piece, xb), yb, q);
+      const t = da > 0 && db <= 0 ? da / (da - db) : 1;
+      toe = xa + t * (xb - xa);
+      hs = sectionAt(piece, toe);
+      y1 = ya + t * ((i0 < sup.length ? sup[i0]! : criticalAt(piece, xb)) - ya);
+      y2 = (subs[i0 - 1] ?? criticalAt(piece, xa)) + t * (yb - (subs[i0 - 1] ?? criticalAt(piece, xa)));
+    } else {
+      hs = piece.section;
+      const difference = (x: number) =>
+        force(hs, depthAt(ctx, piece, xa, ya, x, 'supercritical'), q) - force(hs, depthAt(ctx, piece, xb, yb, x, 'subcritical'), q);
+      toe = locateToe(difference, xa, xb, jumpToeTolerance * ctx.totalLength);
+      y1 = depthAt(ctx, piece, xa, ya, toe, 'supercritical');
+      y2 = depthAt(ctx, piece, xb, yb, toe, 'subcritical');
+    }
     jumps.push(jumpAt(hs, hs, q, toe, y1, y2));
     for (let i = 0; i < i0; i++) final[p]!.push({ station: stations[i]!, depth: sup[i]!, piece: p });
     final[p]!.push({ station: toe, depth: y1, piece: p }, { station: toe, depth: y2, piece: p });
@@ -496,7 +655,7 @@ export function computeProfile(input: ProfileInput, options: EngineOptions = {})
       `The tailwater at the downstream end (station ${show(pieces[last]!.to)}) is too low to hold a jump in the channel: the jump is swept out ` +
         'and the flow leaves supercritical.',
     );
-  } else if (regime === 'super' && input.boundaries.downstream !== undefined && pieces[last]!.cls.slopeClass !== 'steep') {
+  } else if (regime === 'super' && input.boundaries.downstream !== undefined && endClass(pieces[last]!, 'downstream', q).slopeClass !== 'steep') {
     notes.push(
       `The flow reaches the downstream end (station ${show(pieces[last]!.to)}) still supercritical: the downstream control does not act and any jump forms beyond the channel.`,
     );
@@ -510,7 +669,7 @@ export function computeProfile(input: ProfileInput, options: EngineOptions = {})
       const d = subs[i];
       if (d === null || d === undefined) {
         missing = true;
-        final[p]!.push({ station: s, depth: piece.cls.criticalDepth, piece: p, filled: true });
+        final[p]!.push({ station: s, depth: criticalAt(piece, s), piece: p, filled: true });
       } else final[p]!.push({ station: s, depth: d, piece: p });
     });
     if (missing) {
@@ -527,7 +686,7 @@ export function computeProfile(input: ProfileInput, options: EngineOptions = {})
       const beyond = final.flat().filter((e) => e.station < stop.station && e.station >= stop.station - ctx.totalLength);
       const pieceIndex = pieces.findIndex((pc) => stop.station >= pc.from && stop.station <= pc.to);
       const own = beyond.filter((e) => e.piece === pieceIndex);
-      stop.resolved = own.every((e) => !e.filled && e.depth < pieces[e.piece]!.cls.criticalDepth * (1 + 1e-9));
+      stop.resolved = own.every((e) => !e.filled && e.depth < criticalAt(pieces[e.piece]!, e.station) * (1 + 1e-9));
     }
     (stop.resolved ? notes : warnings).push(stop.message);
   }
@@ -550,7 +709,7 @@ export function computeProfile(input: ProfileInput, options: EngineOptions = {})
     // every piece's own entries, ends included (the break station is shared with the neighbour)
     const own = final.filter((_, p) => pieces[p]!.reachIndex === k).flat();
     const from = pieces.find((p) => p.reachIndex === k)!.from;
-    const to = from + reach.length;
+    const to = from + reachLength(reach);
     return {
       id: reach.id,
       from,
@@ -594,7 +753,7 @@ function regimeOf(depth: number, yc: number): Regime {
 }
 
 function stationResult(piece: Piece, e: Entry, discharge: number): StationResult {
-  const hs = piece.reach.section;
+  const hs = sectionAt(piece, e.station);
   const state = flowState(hs, e.depth, discharge);
   const bed = bedAt(piece, e.station);
   return {
@@ -605,9 +764,10 @@ function stationResult(piece: Piece, e: Entry, discharge: number): StationResult
     energyElevation: bed + state.specificEnergy,
     velocity: state.velocity,
     froude: state.froude,
-    regime: regimeOf(e.depth, piece.cls.criticalDepth),
+    regime: regimeOf(e.depth, criticalAt(piece, e.station)),
     reach: piece.reach.id,
-    criticalDepth: piece.cls.criticalDepth,
-    normalDepth: piece.cls.normalDepth,
+    criticalDepth: criticalAt(piece, e.station),
+    normalDepth: piece.nodes ? null : piece.cls.normalDepth,
+    ...(piece.nodes && piece.nodes[piece.stations.indexOf(e.station)]?.interpolated ? { interpolated: true } : {}),
   };
 }

@@ -46,12 +46,23 @@ interface StepOutcome {
 }
 
 /** Solve the energy equation from (x1, s1) to station x2. Exported for the surveyed-reach step and tests. */
-export function energyStep(spec: StretchSpec, x1: number, s1: PointState, x2: number, guess?: number): StepOutcome {
+export function energyStep(
+  spec: StretchSpec,
+  x1: number,
+  s1: PointState,
+  x2: number,
+  guess?: number,
+  /** a head loss besides friction between the known state and a trial one (eddy losses of a non-prismatic step), ≥ 0 */
+  extraLoss?: (known: PointState, trial: PointState) => number,
+): StepOutcome {
   const q = spec.discharge;
   const delta = x2 - x1;
   const yc = spec.criticalDepth;
-  const residualOf = (s: PointState) =>
-    s.energy - s1.energy - spec.slope * delta + meanFrictionSlope(spec.averaging, s1, s, q) * delta;
+  const lossSign = delta > 0 ? 1 : -1;
+  const residualOf = extraLoss
+    ? (s: PointState) =>
+        s.energy - s1.energy - spec.slope * delta + meanFrictionSlope(spec.averaging, s1, s, q) * delta + lossSign * extraLoss(s1, s)
+    : (s: PointState) => s.energy - s1.energy - spec.slope * delta + meanFrictionSlope(spec.averaging, s1, s, q) * delta;
   // the last state evaluated is kept: Brent ends on it, which saves one evaluation per step
   let last: PointState | undefined;
   const residual = (y: number) => {

@@ -1,0 +1,91 @@
+/**
+ * The standard step node to node through a surveyed (non-prismatic) reach (Chow 1959 §10-3 and §10-4;
+ * Henderson 1966 §4.4): between sections 1 and 2 the energy equation
+ *   z2 + y2 + α2V2²/2g = z1 + y1 + α1V1²/2g ± (S̄f·L + he),
+ * with each section's own geometry, α and bed elevation, S̄f from the chosen mean of the two sections' friction
+ * slopes, L the flow length, and the eddy loss he = C·|Δ(αV²/2g)|: the contraction coefficient when the
+ * velocity head increases downstream, the expansion coefficient when it decreases. Defaults 0.1 and 0.3, the
+ * usual values for gradual transitions (common practice; e.g. Chow 1959 §10-4 discusses such values).
+ *
+ * Where no depth on the flow's branch balances a step, the section is set to its critical depth and the
+ * station reported, as careful practice does; the computation continues from there.
+ */
+import type { FrictionAveraging, SurveyNode } from './types.js';
+import { pointState, type PointState } from './energy.js';
+import { energyStep } from './standardStep.js';
+import type { FlowRegime } from './stretch.js';
+
+export const defaultContraction = 0.1;
+export const defaultExpansion = 0.3;
+
+export interface SurveyedRun {
+  /** depths at the nodes in the order given */
+  readonly depths: number[];
+  /** node indices set to critical depth because no depth on the branch balanced the step */
+  readonly setToCritical: number[];
+  readonly steps: number;
+}
+
+/** Flow length from node u to the next node downstream. */
+export function flowLength(nodes: readonly SurveyNode[], u: number): number {
+  const a = nodes[u]!;
+  return a.reachLength ?? nodes[u + 1]!.station - a.station;
+}
+
+/** The eddy loss between an upstream and a downstream state, with the upstream node's coefficients. */
+export function eddyLoss(node: SurveyNode, upstream: PointState, downstream: PointState): number {
+  const dh = downstream.velocityHead - upstream.velocityHead;
+  return dh > 0 ? (node.contraction ?? defaultContraction) * dh : (node.expansion ?? defaultExpansion) * -dh;
+}
+
+/**
+ * Run through the nodes `order` (indices, each next to the previous one), from `startDepth` at the first.
+ * Subcritical runs go upstream (decreasing index), supercritical downstream.
+ */
+export function surveyedStretch(
+  nodes: readonly SurveyNode[],
+  criticals: readonly number[],
+  order: readonly number[],
+  startDepth: number,
+  regime: FlowRegime,
+  discharge: number,
+  averaging: FrictionAveraging,
+  tolerance: (node: number) => number,
+): SurveyedRun {
+  const first = order[0]!;
+  let known = pointState(nodes[first]!.section, startDepth, discharge);
+  const depths = [startDepth];
+  const setToCritical: number[] = [];
+  for (let k = 1; k < order.length; k++) {
+    const a = order[k - 1]!;
+    const b = order[k]!;
+    const u = Math.min(a, b);
+    const d = Math.max(a, b);
+    const length = flowLength(nodes, u);
+    const slope = (nodes[u]!.bedElevation - nodes[d]!.bedElevation) / length;
+    const delta = b > a ? length : -length;
+    const spec = {
+      hs: nodes[b]!.section,
+      slope,
+      discharge,
+      stations: [0, delta],
+      startDepth: known.depth,
+      regime,
+      criticalDepth: criticals[b]!,
+      normalDepth: null,
+      averaging,
+      tolerance: tolerance(b),
+    };
+    const upstreamNode = nodes[u]!;
+    const loss = (s1: PointState, s2: PointState) => (b > a ? eddyLoss(upstreamNode, s1, s2) : eddyLoss(upstreamNode, s2, s1));
+    const outcome = energyStep(spec, 0, known, delta, known.depth, loss);
+    if (outcome.state) {
+      known = outcome.state;
+    } else {
+      setToCritical.push(b);
+      known = pointState(nodes[b]!.section, criticals[b]!, discharge);
+    }
+    depths.push(known.depth);
+  }
+  return { depths, setToCritical, steps: order.length - 1 };
+}
