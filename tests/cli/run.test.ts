@@ -104,9 +104,9 @@ describe('gvf run MODEL.json', () => {
     expect(run.stdout).toBe('');
     expect(run.stderr.split('\n')).toEqual([
       `gvf: ${file} is not a valid model (3 problems):`,
+      '  reaches[0].section: no section named "lind" (did you mean "lined"?); the sections defined are "lined"',
       '  reaches[1].slope: expected a number, got "0.01%"',
       expect.stringMatching(/^ {2}colour: unknown key; the keys allowed here are /),
-      '  reaches[0].section: no section named "lind" (did you mean "lined"?); the sections defined are "lined"',
       '',
     ]);
     expect(existsSync(csv)).toBe(false);

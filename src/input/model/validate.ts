@@ -36,8 +36,34 @@ export function validateModel(json: unknown, fileLabel: string, options: Validat
   const parsed = modelSchema.safeParse(json, parseOptions);
   const problems: Problem[] = parsed.success ? [] : issuesToProblems(parsed.error.issues, modelSchema, json);
   problems.push(...modelRules(json as Record<string, unknown>, options));
-  if (problems.length > 0 || !parsed.success) throw new ModelFileError(fileLabel, dedupe(problems));
+  if (problems.length > 0 || !parsed.success) throw new ModelFileError(fileLabel, inDocumentOrder(dedupe(problems), json));
   return parsed.data;
+}
+
+/** Problems in the order their places appear in the file (a missing key sorts with the object that lacks it). */
+function inDocumentOrder(problems: Problem[], json: unknown): Problem[] {
+  const order = new Map<string, number>();
+  const visit = (value: unknown, path: PropertyKey[]) => {
+    order.set(formatPath(path), order.size);
+    if (Array.isArray(value)) value.forEach((v, i) => visit(v, [...path, i]));
+    else if (isRecord(value)) for (const [k, v] of Object.entries(value)) visit(v, [...path, k]);
+  };
+  visit(json, []);
+  const rank = (where: string): number => {
+    let place = where;
+    for (let guard = 0; guard < 64; guard++) {
+      const found = order.get(place);
+      if (found !== undefined) return found;
+      const cut = Math.max(place.lastIndexOf('.'), place.lastIndexOf('['));
+      if (cut <= 0) return -1;
+      place = place.slice(0, cut);
+    }
+    return -1;
+  };
+  return problems
+    .map((problem, index) => ({ problem, index, rank: rank(problem.where) }))
+    .sort((a, b) => a.rank - b.rank || a.index - b.index)
+    .map((entry) => entry.problem);
 }
 
 function dedupe(problems: Problem[]): Problem[] {

@@ -65,6 +65,20 @@ describe('validateModel(json, file)', () => {
     expect(problems).toEqual([{ where: 'reaches[1].slope', message: 'expected a number, got "0.01%"', value: '0.01%' }]);
   });
 
+  it('validateModel(json) keeps the offending value with each problem', () => {
+    const json = edit((m) => {
+      (m.reaches[0] as Record<string, unknown>).lenght = 90;
+      m.reaches[1]!.section = 'lind';
+      m.flows[0]!.discharge = -3.1;
+    });
+    // in the order the places appear in the file
+    expect(problemsOf(json).map((p) => [p.where, p.value])).toEqual([
+      ['reaches[0].lenght', 90],
+      ['reaches[1].section', 'lind'],
+      ['flows[0].discharge', -3.1],
+    ]);
+  });
+
   it('validateModel(json) reports a reach naming a section that does not exist, with a suggestion', () => {
     expect(lines(edit((m) => (m.reaches[0]!.section = 'lind')))).toEqual([
       'reaches[0].section: no section named "lind" (did you mean "lined"?); the sections defined are "lined"',
@@ -217,8 +231,8 @@ describe('validateModel(json, file)', () => {
       m.reaches[1]!.section = 'nowhere';
     });
     expect(lines(json)).toEqual([
-      'flows[0].discharge: expected a number greater than 0, got -1',
       'reaches[1].section: no section named "nowhere"; the sections defined are "lined"',
+      'flows[0].discharge: expected a number greater than 0, got -1',
     ]);
   });
 
