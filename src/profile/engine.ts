@@ -325,13 +325,9 @@ function integratePiece(ctx: Context, piece: Piece, stations: number[], startDep
     (j) => accuracyFor(system, piece.criticals![j]!) / (refinement * refinement),
   );
   ctx.steps += result.steps;
-  for (const j of result.setToCritical) {
-    ctx.warnings.push(
-      `Station ${show(piece.stations[j]!)} of surveyed reach '${piece.reach.id}': no ${regime} depth balances the energy equation from the neighbouring section; ` +
-        'set to critical depth (as careful practice does). Check the survey spacing or a control there.',
-    );
-  }
-  return { depths: result.depths, steps: result.steps };
+  if (result.setToCritical === undefined) return { depths: result.depths, steps: result.steps };
+  const j = result.setToCritical;
+  return { depths: result.depths, steps: result.steps, stop: { station: piece.stations[j]!, depth: piece.criticals![j]!, reason: 'critical' } };
 }
 
 /** The depth at station x, integrating from (x0, y0) over one short stretch; critical depth where the profile stops first. */

@@ -7,8 +7,9 @@
  * velocity head increases downstream, the expansion coefficient when it decreases. Defaults 0.1 and 0.3, the
  * usual values for gradual transitions (common practice; e.g. Chow 1959 §10-4 discusses such values).
  *
- * Where no depth on the flow's branch balances a step, the section is set to its critical depth and the
- * station reported, as careful practice does; the computation continues from there.
+ * Where no depth on the flow's branch balances a step, the section is set to its critical depth, as careful
+ * practice does, and the run stops there (the engine decides from the other regime's profile what lies beyond:
+ * a jump, or a control; where nothing does, it warns).
  */
 import type { FrictionAveraging, SurveyNode } from './types.js';
 import { pointState, type PointState } from './energy.js';
@@ -19,10 +20,10 @@ export const defaultContraction = 0.1;
 export const defaultExpansion = 0.3;
 
 export interface SurveyedRun {
-  /** depths at the nodes in the order given */
+  /** depths at the nodes in the order given, up to and including a node set to critical depth */
   readonly depths: number[];
-  /** node indices set to critical depth because no depth on the branch balanced the step */
-  readonly setToCritical: number[];
+  /** the node set to critical depth because no depth on the branch balanced the step into it */
+  readonly setToCritical?: number;
   readonly steps: number;
 }
 
@@ -55,7 +56,6 @@ export function surveyedStretch(
   const first = order[0]!;
   let known = pointState(nodes[first]!.section, startDepth, discharge);
   const depths = [startDepth];
-  const setToCritical: number[] = [];
   for (let k = 1; k < order.length; k++) {
     const a = order[k - 1]!;
     const b = order[k]!;
@@ -79,13 +79,12 @@ export function surveyedStretch(
     const upstreamNode = nodes[u]!;
     const loss = (s1: PointState, s2: PointState) => (b > a ? eddyLoss(upstreamNode, s1, s2) : eddyLoss(upstreamNode, s2, s1));
     const outcome = energyStep(spec, 0, known, delta, known.depth, loss);
-    if (outcome.state) {
-      known = outcome.state;
-    } else {
-      setToCritical.push(b);
-      known = pointState(nodes[b]!.section, criticals[b]!, discharge);
+    if (!outcome.state) {
+      depths.push(criticals[b]!);
+      return { depths, setToCritical: b, steps: k };
     }
+    known = outcome.state;
     depths.push(known.depth);
   }
-  return { depths, setToCritical, steps: order.length - 1 };
+  return { depths, steps: order.length - 1 };
 }

@@ -6,6 +6,7 @@
 import { describe, expect, it } from 'vitest';
 import { accuracyFor } from '../../src/core/tolerances.js';
 import { SI } from '../../src/core/units.js';
+import { rectangular } from '../../src/geometry/shapes/rectangular.js';
 import { trapezoidal } from '../../src/geometry/shapes/trapezoidal.js';
 import { hydraulicSection } from '../../src/hydraulics/hydraulicSection.js';
 import { computeProfile } from '../../src/profile/engine.js';
@@ -98,5 +99,35 @@ describe('computeProfile with a surveyed reach', () => {
       const balance = nodes[i]!.bedElevation + up.energy - (nodes[i + 1]!.bedElevation + down.energy) - hf - he;
       expect(Math.abs(balance), `step ${i}`).toBeLessThan(1e-7);
     }
+  });
+});
+
+describe('computeProfile: mixed flow through a surveyed reach', () => {
+  it('computeProfile: a surveyed steep chute into a prismatic mild channel: the jump sits where the prismatic engine puts it', () => {
+    const rect = hydraulicSection(rectangular({ bottomWidth: 5, roughness: 0.015 }), 'manning', SI);
+    const nodes: SurveyNode[] = Array.from({ length: 61 }, (_, i) => ({ station: i * 5, bedElevation: 20 - 0.02 * i * 5, section: rect, contraction: 0, expansion: 0 }));
+    const tail = { downstream: { type: 'depth' as const, depth: 2.6 } };
+    const surveyed = computeProfile({
+      units: SI,
+      reaches: [{ kind: 'surveyed', id: 'chute', nodes }, { id: 'channel', section: rect, length: 600, slope: 0.0005 }],
+      discharge: 20,
+      flowId: 'f',
+      boundaries: tail,
+      method: 'standard-step',
+      downstreamBedElevation: 14 - 0.3,
+    });
+    const prismatic = computeProfile({
+      units: SI,
+      reaches: [{ id: 'chute', section: rect, length: 300, slope: 0.02 }, { id: 'channel', section: rect, length: 600, slope: 0.0005 }],
+      discharge: 20,
+      flowId: 'f',
+      boundaries: tail,
+      method: 'ode',
+    });
+    expect(surveyed.jumps).toHaveLength(1);
+    // the toe between surveyed sections 5 m apart comes from linear interpolation of the specific-force difference
+    assertInDelta(surveyed.jumps[0]!.station, prismatic.jumps[0]!.station, 0.5, 'toe station');
+    assertInDelta(surveyed.jumps[0]!.downstreamDepth, prismatic.jumps[0]!.downstreamDepth, 0.005, 'sequent depth');
+    expect(surveyed.warnings).toEqual([]);
   });
 });
