@@ -302,6 +302,9 @@ function stretchSpec(ctx: Context, piece: Piece, stations: number[], startDepth:
 function run(ctx: Context, spec: StretchSpec): StretchProfile {
   const result = ctx.integrate(spec);
   ctx.steps += result.steps;
+  // interpolated output may overshoot a crown by round-off: keep depths inside the section
+  const top = spec.hs.section.maxDepth;
+  if (Number.isFinite(top)) for (let i = 0; i < result.depths.length; i++) if (result.depths[i]! > top) result.depths[i] = top;
   return result;
 }
 

@@ -136,6 +136,7 @@ function stationLeg(
   x0: number,
   y0: number,
   watchBand: boolean,
+  gradientFloor = nearCriticalFloor,
 ): { x: number; y: number; entered: boolean; full: boolean; reachedCritical: boolean } {
   const slope = spec.slope;
   const floor = floorDepth(spec);
@@ -149,7 +150,7 @@ function stationLeg(
     if (branch < 0 && yy > yc) yy = yc;
     if (yy < floor) yy = floor;
     if (yy > top) yy = top;
-    if (!spec.criticalSlope) return [depthGradient(stateAt(spec, yy), slope, nearCriticalFloor)];
+    if (!spec.criticalSlope) return [depthGradient(stateAt(spec, yy), slope, gradientFloor)];
     // critical slope: the ratio is finite through critical depth; at it (0/0) take it just on the branch side
     let s = stateAt(spec, yy);
     if (Math.abs(s.dEdy) < 1e-9) s = stateAt(spec, yc * (1 + branch * 1e-6));
@@ -226,6 +227,21 @@ function integrate(spec: StretchSpec, settings: OdeSettings): StretchProfile {
     entered = false;
     if (nearCritical) {
       const trend = depthTrend(spec, state);
+      const yn = spec.normalDepth;
+      const towards = trend > 0 ? Infinity : 0;
+      const target = Math.sign(yc - y) === trend ? yc : Math.min(Math.max(bandExit(spec, y, trend), Math.min(y, towards)), Math.max(y, towards));
+      if (yn !== null && trend !== 0 && (yn - y) * (yn - target) < 0) {
+        // normal depth lies inside the band, between here and where the band would be left (a slope near the
+        // critical one): the profile tends to it and never reaches critical depth. Leave the steepest part in
+        // x(y), then integrate y(x) with a floor on dE/dy below any value met on the way.
+        const mid = y + 0.5 * (yn - y);
+        const xm = depthLeg(spec, settings, out, x, y, mid);
+        if (direction * (xm - xLast) >= 0 || out.pending === undefined) return done();
+        const floor = Math.max(1e-9, 0.5 * Math.min(Math.abs(stateAt(spec, mid).dEdy), Math.abs(stateAt(spec, yn).dEdy)));
+        const leg = stationLeg(spec, settings, out, xm, mid, false, floor);
+        if (leg.full) return stopAt(leg.x, leg.y, 'full');
+        return done();
+      }
       const towardCritical = trend !== 0 && Math.sign(yc - y) === trend;
       const leavingBranch = atCritical(spec, y) && trend !== branchSign(spec.regime);
       if (leavingBranch) return stopAt(x, yc, 'critical');
