@@ -29,6 +29,11 @@ export interface RunOptions {
   readonly outputSpacing?: number;
   /** also run the other two methods and compare */
   readonly compare?: boolean;
+  /**
+   * Changes each flow's engine input before it is computed (src/analysis: roughness multipliers, varied
+   * discharges, a downstream stage per flow of a batch). The stages and the comparison see the changed inputs.
+   */
+  readonly adjustInput?: (input: ProfileInput, index: number) => ProfileInput;
 }
 
 export interface RunStages {
@@ -73,7 +78,9 @@ export interface ModelRun {
 
 export function runModel(model: Model, options: RunOptions = {}): ModelRun {
   const sections = assembleSections(model);
-  const inputs = assembleProfileInputs(model, sections, options);
+  const assembled = assembleProfileInputs(model, sections, options);
+  const adjust = options.adjustInput;
+  const inputs = adjust === undefined ? assembled : assembled.map((input, i) => adjust(input, i));
   const method = options.method ?? model.method;
   const flows = inputs.map((input) => computeProfile(input));
   const result: RunResult = {
