@@ -1,15 +1,18 @@
 /**
  * Culvert barrel geometry and the part-full depths the culvert methods need (critical and normal depth,
  * α = 1 as in FHWA HDS-5). A circular barrel uses the segment formulas of geometry/shapes/circular.ts;
- * a box barrel is a rectangle closed at its rise.
+ * a box barrel is a rectangle closed at its rise (./boxSection.ts). Critical and normal depths come from the
+ * hydraulics layer (criticalDepth, normalDepths) on the barrel's own hydraulic section, so the culvert and
+ * the profile engine agree to the solvers' tolerance.
  */
 import { requireInput } from '../../core/errors.js';
-import { brentRoot, scanSignChanges } from '../../core/roots.js';
-import { minimumDepthFraction } from '../../core/tolerances.js';
 import type { Units } from '../../core/units.js';
 import type { Elements } from '../../geometry/section.js';
-import { circularSegment } from '../../geometry/shapes/circular.js';
-import { structureTolerance } from '../invert.js';
+import { circular, circularSegment } from '../../geometry/shapes/circular.js';
+import { criticalDepth } from '../../hydraulics/criticalDepth.js';
+import { type HydraulicSection, hydraulicSection } from '../../hydraulics/hydraulicSection.js';
+import { normalDepths } from '../../hydraulics/normalDepth.js';
+import { boxElements, boxSection } from './boxSection.js';
 
 export type BarrelShape =
   | { readonly shape: 'circular'; readonly diameter: number }
@@ -50,12 +53,22 @@ export function barrel(shape: BarrelShape, where = 'structure.barrel'): Barrel {
     fullArea: b * D,
     fullPerimeter: 2 * (b + D),
     fullHydraulicRadius: (b * D) / (2 * (b + D)),
-    elements: (y) => {
-      const depth = Math.min(Math.max(y, 0), D);
-      if (depth >= D) return { area: b * D, wettedPerimeter: 2 * (b + D), topWidth: 0, firstMoment: (b * D * D) / 2 };
-      return { area: b * depth, wettedPerimeter: b + 2 * depth, topWidth: b, firstMoment: (b * depth * depth) / 2 };
-    },
+    elements: (y) => boxElements(b, D, y),
   };
+}
+
+/** Manning's n used where only geometry matters (critical depth does not depend on roughness). */
+const geometryOnlyRoughness = 0.013;
+
+/**
+ * The barrel as a hydraulic section with Manning's n (α = 1): a circular conduit or a closed box, for the
+ * hydraulics solvers and for running the profile engine through the barrel.
+ */
+export function barrelSection(b: Barrel, roughness: number, units: Units): HydraulicSection {
+  const section = b.shape.shape === 'circular'
+    ? circular({ diameter: b.shape.diameter, roughness })
+    : boxSection(b.shape.span, b.shape.rise, roughness);
+  return hydraulicSection(section, 'manning', units);
 }
 
 /**
@@ -65,15 +78,7 @@ export function barrel(shape: BarrelShape, where = 'structure.barrel'): Barrel {
 export function barrelCriticalDepth(b: Barrel, discharge: number, units: Units): number {
   if (discharge <= 0) return 0;
   if (b.shape.shape === 'box') return Math.min(Math.cbrt((discharge / b.shape.span) ** 2 / units.g), b.rise);
-  const D = b.rise;
-  const f = (y: number) => {
-    const e = b.elements(y);
-    return discharge * discharge * e.topWidth - units.g * e.area * e.area * e.area;
-  };
-  // f > 0 near the invert (A → 0), f < 0 at the crown (T = 0): one sign change.
-  const lo = D * minimumDepthFraction;
-  if (f(lo) <= 0) return lo;
-  return brentRoot(f, lo, D, { xTolerance: structureTolerance(D), what: 'critical depth in the culvert barrel' });
+  return Math.min(criticalDepth(barrelSection(b, geometryOnlyRoughness, units), discharge), b.rise);
 }
 
 /** Specific head at critical depth, Hc = dc + Ac/(2·Tc) (α = 1); Hc = 1.5·dc for a box. */
@@ -97,11 +102,5 @@ export function barrelConveyance(b: Barrel, depth: number, roughness: number, un
  */
 export function barrelNormalDepth(b: Barrel, discharge: number, slope: number, roughness: number, units: Units): number | null {
   if (!(slope > 0) || discharge <= 0) return null;
-  const D = b.rise;
-  const f = (y: number) => barrelConveyance(b, y, roughness, units) * Math.sqrt(slope) - discharge;
-  const top = D * (1 - minimumDepthFraction);
-  const brackets = scanSignChanges(f, 0, top);
-  const first = brackets[0];
-  if (!first) return null;
-  return brentRoot(f, first[0], first[1], { xTolerance: structureTolerance(D), what: 'normal depth in the culvert barrel' });
+  return normalDepths(barrelSection(b, roughness, units), discharge, slope).depth;
 }
