@@ -92,3 +92,9 @@ export const colebrookWhiteTolerance = 1e-12;
 export const conveyanceJumpFraction = 1e-6;
 /** Profile: the standard step solves each step's depth to this fraction of the accuracy goal (Brent's x tolerance). */
 export const energyStepDepthFraction = 1e-5;
+/** Profile: the standard step closes in on a critical stop until it lies within this fraction of the stretch length. */
+export const stopApproachFraction = 1e-9;
+/** Profile: at most this many closing-in steps towards a critical stop. */
+export const stopApproachLimit = 200;
+/** Profile: a standard-step stretch that ends at critical depth is re-run at most this many times, each 16 times tighter. */
+export const stopRefinements = 3;

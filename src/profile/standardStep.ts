@@ -18,6 +18,9 @@ import { NumericalError } from '../core/errors.js';
 import { brentRoot } from '../core/roots.js';
 import {
   criticalStartStepFraction,
+  stopApproachFraction,
+  stopApproachLimit,
+  stopRefinements,
   energyStepDepthFraction,
   firstStepFraction,
   nearCriticalBand,
@@ -143,7 +146,7 @@ function localError(x1: number, sf1: number, x2: number, sf2: number, x3: number
   return (h * h * h * Math.abs(second)) / (12 * d);
 }
 
-export function standardStep(spec: StretchSpec): StretchProfile {
+function march(spec: StretchSpec): StretchProfile {
   const uniform = uniformStretch(spec);
   if (uniform) return uniform;
   const stations = spec.stations;
@@ -173,6 +176,7 @@ export function standardStep(spec: StretchSpec): StretchProfile {
   // near critical depth every output station is a computed one; elsewhere a step may span several, which are
   // filled by cubic Hermite interpolation with dy/dx from the equation at both ends (fourth-order error)
   let landing = false;
+  let approaches = 0;
   while (next < stations.length) {
     const nearCritical = landing || Math.abs(state.dEdy) < nearCriticalBand;
     const limit = nearCritical ? stations[next]! : lastStation;
@@ -197,6 +201,14 @@ export function standardStep(spec: StretchSpec): StretchProfile {
     if (outcome.stop) {
       if (skips && direction * (outcome.stop.station - stations[next]!) > 0) {
         // stations lie before the stop: compute them one by one
+        landing = true;
+        continue;
+      }
+      // close in on the stop with steps of a quarter of the remaining distance: near critical depth the
+      // depth varies like the square root of the distance, and one long last step would misplace the stop
+      const remainingToStop = direction * (outcome.stop.station - x);
+      if (remainingToStop > length * stopApproachFraction && approaches++ < stopApproachLimit) {
+        h = remainingToStop / 4;
         landing = true;
         continue;
       }
@@ -237,4 +249,29 @@ export function standardStep(spec: StretchSpec): StretchProfile {
     }
   }
   return { depths, steps };
+}
+
+/**
+ * The standard step with a Richardson check where it matters most: a profile that runs into critical depth
+ * carries its errors into a region where they grow (the depth varies like the square root of the distance
+ * to the stop), so such a stretch is recomputed at a tolerance 16 times tighter (steps 4 times shorter) and,
+ * while the two differ by more than the accuracy share, tightened again (at most stopRefinements times).
+ */
+export function standardStep(spec: StretchSpec): StretchProfile {
+  let result = march(spec);
+  if (result.stop?.reason !== 'critical' || result.depths.length < 2) return result;
+  let steps = result.steps;
+  let tolerance = spec.tolerance;
+  for (let k = 0; k < stopRefinements; k++) {
+    tolerance /= 16;
+    const finer = march({ ...spec, tolerance });
+    steps += finer.steps;
+    const m = Math.min(finer.depths.length, result.depths.length);
+    let difference = 0;
+    for (let i = 0; i < m; i++) difference = Math.max(difference, Math.abs(finer.depths[i]! - result.depths[i]!));
+    const settled = difference <= spec.tolerance * profileAccuracySafety && finer.depths.length === result.depths.length;
+    result = finer;
+    if (settled) break;
+  }
+  return { ...result, steps };
 }
