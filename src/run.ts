@@ -34,6 +34,8 @@ export interface RunOptions {
    * discharges, a downstream stage per flow of a batch). The stages and the comparison see the changed inputs.
    */
   readonly adjustInput?: (input: ProfileInput, index: number) => ProfileInput;
+  /** called after each flow is computed (the CLI's progress bar) */
+  readonly onProgress?: (done: number, total: number, flowId: string) => void;
 }
 
 export interface RunStages {
@@ -82,7 +84,11 @@ export function runModel(model: Model, options: RunOptions = {}): ModelRun {
   const adjust = options.adjustInput;
   const inputs = adjust === undefined ? assembled : assembled.map((input, i) => adjust(input, i));
   const method = options.method ?? model.method;
-  const flows = inputs.map((input) => computeProfile(input));
+  const flows = inputs.map((input, i) => {
+    const flow = computeProfile(input);
+    options.onProgress?.(i + 1, inputs.length, input.flowId);
+    return flow;
+  });
   const result: RunResult = {
     ...(model.title === undefined ? {} : { title: model.title }),
     units: model.units,
