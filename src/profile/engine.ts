@@ -58,6 +58,7 @@ interface Piece {
   readonly criticals?: readonly number[];
   /** the control at the downstream end of this piece, if any */
   readonly control?: InternalControl;
+  readonly discharge: number;
 }
 
 interface Entry {
@@ -91,6 +92,9 @@ function validate(input: ProfileInput): void {
   }
   if (input.reaches.length === 0) problems.push({ where: 'reaches', message: 'at least one reach is needed', value: input.reaches });
   input.reaches.forEach((reach, i) => {
+    if (reach.discharge !== undefined && !(Number.isFinite(reach.discharge) && reach.discharge > 0)) {
+      problems.push({ where: `reaches[${i}].discharge`, message: 'the discharge must be a number > 0', value: reach.discharge });
+    }
     if (reach.kind === 'surveyed') {
       const nodes = reach.nodes;
       if (nodes.length < 2) problems.push({ where: `reaches[${i}].nodes`, message: 'a surveyed reach needs at least two sections', value: nodes.length });
@@ -125,7 +129,6 @@ function reachLength(reach: ReachInput): number {
 
 function layout(input: ProfileInput, classes: ReachClass[]): Piece[] {
   const reaches = input.reaches;
-  const q = input.discharge;
   // reach extents: surveyed reaches keep their own stations, and must join the reach above
   const starts: number[] = [];
   let x = reaches[0]!.kind === 'surveyed' ? reaches[0]!.nodes[0]!.station : 0;
@@ -166,6 +169,7 @@ function layout(input: ProfileInput, classes: ReachClass[]): Piece[] {
     const length = reachLength(reach);
     const to = from + length;
     const atEnd = controls.find((c) => Math.abs(c.station - to) <= merge);
+    const q = reach.discharge ?? input.discharge;
     if (reach.kind === 'surveyed') {
       const nodes = reach.nodes;
       const last = nodes[nodes.length - 1]!;
@@ -182,6 +186,7 @@ function layout(input: ProfileInput, classes: ReachClass[]): Piece[] {
         nodes,
         criticals: nodes.map((n) => criticalDepthOf(n.section, q)),
         ...(atEnd ? { control: atEnd } : {}),
+        discharge: q,
       });
       bedBelow = nodes[0]!.bedElevation;
       continue;
@@ -214,6 +219,7 @@ function layout(input: ProfileInput, classes: ReachClass[]): Piece[] {
         slope: reach.slope,
         bedAtEnd,
         ...(control ? { control } : {}),
+        discharge: q,
       });
       bedBelow = bedAtEnd + reach.slope * (b - a);
     }
@@ -259,8 +265,9 @@ function criticalAt(piece: Piece, station: number): number {
 }
 
 /** The class at one end of a piece: a surveyed reach uses the end section with the slope of the end interval. */
-function endClass(piece: Piece, end: 'upstream' | 'downstream', discharge: number): ReachClass {
+function endClass(piece: Piece, end: 'upstream' | 'downstream'): ReachClass {
   if (!piece.nodes) return piece.cls;
+  const discharge = piece.discharge;
   const nodes = piece.nodes;
   const j = end === 'upstream' ? 0 : nodes.length - 2;
   const slope = (nodes[j]!.bedElevation - nodes[j + 1]!.bedElevation) / (nodes[j + 1]!.station - nodes[j]!.station);
@@ -287,7 +294,7 @@ function stretchSpec(ctx: Context, piece: Piece, stations: number[], startDepth:
   return {
     hs: piece.section,
     slope: piece.slope,
-    discharge: ctx.input.discharge,
+    discharge: piece.discharge,
     stations,
     startDepth,
     regime,
@@ -323,7 +330,7 @@ function integratePiece(ctx: Context, piece: Piece, stations: number[], startDep
     order,
     startDepth,
     regime,
-    ctx.input.discharge,
+    piece.discharge,
     ctx.input.frictionAveraging ?? 'conveyance',
     (j) => accuracyFor(system, piece.criticals![j]!) / (refinement * refinement),
   );
@@ -352,8 +359,8 @@ export function computeProfile(input: ProfileInput, options: EngineOptions = {})
   const reaches = input.reaches;
   const classes = reaches.map((r) =>
     r.kind === 'surveyed'
-      ? classifyReach(r.nodes[0]!.section, q, (r.nodes[0]!.bedElevation - r.nodes[r.nodes.length - 1]!.bedElevation) / reachLength(r))
-      : classifyReach(r.section, q, r.slope),
+      ? classifyReach(r.nodes[0]!.section, r.discharge ?? q, (r.nodes[0]!.bedElevation - r.nodes[r.nodes.length - 1]!.bedElevation) / reachLength(r))
+      : classifyReach(r.section, r.discharge ?? q, r.slope),
   );
   const warnings: string[] = [];
   const pieces = layout(input, classes);
@@ -372,7 +379,7 @@ export function computeProfile(input: ProfileInput, options: EngineOptions = {})
   const jumps: JumpResult[] = [];
   const last = pieces.length - 1;
   const endInfo = (p: Piece, station: number): EndInfo => ({
-    reach: endClass(p, station === p.from ? 'upstream' : 'downstream', q),
+    reach: endClass(p, station === p.from ? 'upstream' : 'downstream'),
     bedElevation: bedAt(p, station),
     station,
     maxDepth: sectionAt(p, station).section.maxDepth,
@@ -403,7 +410,7 @@ export function computeProfile(input: ProfileInput, options: EngineOptions = {})
       const below = pieces[p + 1]!;
       const tail = sub[p + 1]![0] ?? null;
       const response = piece.control.respond({
-        discharge: q,
+        discharge: piece.discharge,
         units: input.units,
         station: piece.to,
         upstreamSection: sectionAt(piece, piece.to),
@@ -436,7 +443,7 @@ export function computeProfile(input: ProfileInput, options: EngineOptions = {})
       });
       start = y;
     } else {
-      const b = breakStart(endClass(piece, 'downstream', q), sub[p + 1]![0] ?? null);
+      const b = breakStart(endClass(piece, 'downstream'), sub[p + 1]![0] ?? null);
       start = b.depth;
       criticalBelow[p] = b.critical;
     }
@@ -470,6 +477,7 @@ export function computeProfile(input: ProfileInput, options: EngineOptions = {})
     const subs = sub[p]!;
     const stations = piece.stations;
     const yc = criticalAt(piece, piece.from);
+    const q = piece.discharge;
     let ys: number | null = null;
     let startKind = '';
     if (p === 0) {
@@ -654,7 +662,7 @@ export function computeProfile(input: ProfileInput, options: EngineOptions = {})
       `The tailwater at the downstream end (station ${show(pieces[last]!.to)}) is too low to hold a jump in the channel: the jump is swept out ` +
         'and the flow leaves supercritical.',
     );
-  } else if (regime === 'super' && input.boundaries.downstream !== undefined && endClass(pieces[last]!, 'downstream', q).slopeClass !== 'steep') {
+  } else if (regime === 'super' && input.boundaries.downstream !== undefined && endClass(pieces[last]!, 'downstream').slopeClass !== 'steep') {
     notes.push(
       `The flow reaches the downstream end (station ${show(pieces[last]!.to)}) still supercritical: the downstream control does not act and any jump forms beyond the channel.`,
     );
@@ -702,7 +710,7 @@ export function computeProfile(input: ProfileInput, options: EngineOptions = {})
       entries.push(e);
     }
   }
-  const stationsOut: StationResult[] = entries.map((e) => stationResult(pieces[e.piece]!, e, q));
+  const stationsOut: StationResult[] = entries.map((e) => stationResult(pieces[e.piece]!, e, pieces[e.piece]!.discharge));
   const reachResults: ReachResult[] = reaches.map((reach, k) => {
     const cls = classes[k]!;
     // every piece's own entries, ends included (the break station is shared with the neighbour)
@@ -716,6 +724,7 @@ export function computeProfile(input: ProfileInput, options: EngineOptions = {})
       slopeClass: cls.slopeClass,
       normalDepth: cls.normalDepth,
       criticalDepth: cls.criticalDepth,
+      ...(reach.discharge !== undefined ? { discharge: reach.discharge } : {}),
       profiles: profileStretches(
         cls,
         own.map((e) => e.station),

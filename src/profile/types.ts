@@ -41,6 +41,8 @@ export interface PrismaticReachInput {
   readonly length: number;
   /** bed slope S0, positive when the bed falls downstream; 0 horizontal; negative adverse */
   readonly slope: number;
+  /** the discharge in this reach when it differs from ProfileInput.discharge (a flow change at its upstream end) */
+  readonly discharge?: number;
 }
 
 /**
@@ -66,6 +68,8 @@ export interface SurveyedReachInput {
   readonly kind: 'surveyed';
   readonly id: string;
   readonly nodes: readonly SurveyNode[];
+  /** the discharge in this reach when it differs from ProfileInput.discharge (a flow change at its upstream end) */
+  readonly discharge?: number;
 }
 
 export type ReachInput = PrismaticReachInput | SurveyedReachInput;
@@ -120,6 +124,7 @@ export interface ProfileInput {
   readonly units: Units;
   /** reaches from upstream to downstream, joined end to end */
   readonly reaches: readonly ReachInput[];
+  /** the discharge (of every reach that does not give its own) */
   readonly discharge: number;
   readonly flowId: string;
   readonly boundaries: { readonly upstream?: Boundary; readonly downstream?: Boundary };

@@ -36,6 +36,8 @@ export interface StationResult {
   /** bank or lining tops where known */
   leftBank?: number;
   rightBank?: number;
+  /** the discharge at this station, present where it changes along the channel (flow changes, lateral inflow) */
+  discharge?: number;
 }
 
 export interface ProfileStretch {
@@ -52,6 +54,8 @@ export interface ReachResult {
   normalDepth: number | null;
   criticalDepth: number;
   profiles: ProfileStretch[];
+  /** the reach's own discharge where it differs from the flow's (a flow change); added by the profile engine */
+  discharge?: number;
 }
 
 /** Jump classification by upstream Froude number (Chow 1959 §15-3, after USBR tests). */

@@ -160,3 +160,28 @@ describe('computeProfile: a profile running into critical depth', () => {
   });
 });
 
+
+describe('computeProfile: a flow change between reaches (a tributary)', () => {
+  it('computeProfile: each reach carries its own discharge; the depth is continuous at the junction and the reach below matches a run of its own', () => {
+    const reaches = [
+      { id: 'above', section: rect5, length: 1000, slope: mild },
+      { id: 'below', section: rect5, length: 1000, slope: mild, discharge: 30 },
+    ];
+    const joined = computeProfile(channel(reaches, { downstream: { type: 'depth', depth: 3.5 } }, { method: 'ode', outputSpacing: 10 }));
+    const alone = computeProfile(
+      channel([{ id: 'below', section: rect5, length: 1000, slope: mild }], { downstream: { type: 'depth', depth: 3.5 } }, { method: 'ode', discharge: 30, outputSpacing: 10 }),
+    );
+    const below = joined.stations.filter((s) => s.station >= 1000);
+    expect(below).toHaveLength(alone.stations.length);
+    below.forEach((s, i) => {
+      expect(s.station - 1000).toBeCloseTo(alone.stations[i]!.station, 9);
+      assertInDelta(s.depth, alone.stations[i]!.depth, 1e-9, `station ${s.station}`);
+    });
+    // upstream of the junction the smaller flow: its velocity at the junction depth is 20/30 of the one below
+    const above = joined.stations.filter((s) => s.station < 1000);
+    const last = above[above.length - 1]!;
+    expect(joined.reaches[1]!.discharge).toBe(30);
+    expect(joined.reaches[0]!.criticalDepth).toBeLessThan(joined.reaches[1]!.criticalDepth);
+    expect(last.velocity).toBeCloseTo(20 / (5 * last.depth), 12);
+  });
+});
