@@ -428,9 +428,12 @@ export function computeProfile(input: ProfileInput, options: EngineOptions = {})
         warnings.push(`The ${piece.control.kind} '${piece.control.id}' at station ${show(piece.to)} gave no usable headwater (${y}); critical depth used.`);
         y = yc;
       } else if (y < yc) {
-        warnings.push(
-          `The ${piece.control.kind} '${piece.control.id}' at station ${show(piece.to)} gave a headwater depth ${show(y)} below critical depth ${show(yc)}; critical depth used.`,
-        );
+        // below critical by more than round-off is a structure's mistake: say so
+        if (y < yc * (1 - 1e-9)) {
+          warnings.push(
+            `The ${piece.control.kind} '${piece.control.id}' at station ${show(piece.to)} gave a headwater depth ${show(y)} below critical depth ${show(yc)}; critical depth used.`,
+          );
+        }
         y = yc;
       }
       controls.push({
