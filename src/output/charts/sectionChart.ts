@@ -82,6 +82,14 @@ export function wettedStretches(ground: readonly (readonly [number, number])[], 
   return out;
 }
 
+/** Water levels for the subtitle, two to a line, so several flows are listed in full rather than cut off. */
+function subtitleLines(parts: readonly string[]): string | string[] {
+  if (parts.length === 0) return ' ';
+  const lines: string[] = [];
+  for (let i = 0; i < parts.length; i += 2) lines.push(parts.slice(i, i + 2).join('; '));
+  return lines.length === 1 ? lines[0]! : lines;
+}
+
 export function sectionChart(input: SectionChartInput): TopLevelSpec {
   const width = input.width ?? size.section.width;
   const height = input.height ?? size.section.height;
@@ -125,7 +133,7 @@ export function sectionChart(input: SectionChartInput): TopLevelSpec {
   const zoneRows = inner.map((b) => ({ offset: r(b), bottom: r(yLow), top: r(yHigh), series: words.zoneBoundary }));
   const zoneLabels = zones.map((z) => ({
     offset: r((z.from + z.to) / 2),
-    elevation: r(yLow + 0.04 * (yHigh - yLow)),
+    elevation: r(yHigh - 0.03 * (yHigh - yLow)),
     label: z.label ?? (isFiniteNumber(z.n) ? `n = ${z.n}` : ''),
   })).filter((z) => z.label !== '');
 
@@ -190,14 +198,14 @@ export function sectionChart(input: SectionChartInput): TopLevelSpec {
     layer.push({
       name: 'zone-labels',
       data: { name: 'zoneLabels' },
-      mark: { type: 'text', baseline: 'bottom', fontSize: font.annotationSize, color: palette.zone },
+      mark: { type: 'text', baseline: 'top', dy: 2, fontSize: font.annotationSize, color: palette.zone },
       encoding: { x: xPlain, y: { field: 'elevation', type: 'quantitative' }, text: { field: 'label' } },
     });
   }
   const spec = {
     $schema: 'https://vega.github.io/schema/vega-lite/v6.json',
     description: 'gvf cross-section',
-    title: { text: title, limit: width - 10, subtitle: levels.map((w) => `${w.flow}: water surface ${w.wsel.toFixed(3)} ${u}`).join('; ') || ' ' },
+    title: { text: title, limit: width - 10, subtitle: subtitleLines(levels.map((w) => `${w.flow}: water surface ${w.wsel.toFixed(3)} ${u}`)) },
     width,
     height,
     autosize: { type: 'fit', contains: 'padding' },
