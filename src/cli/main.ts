@@ -7,9 +7,8 @@
 import { realpathSync } from 'node:fs';
 import { fileURLToPath } from 'node:url';
 import { Command, CommanderError, Option } from 'commander';
+import { programVersion as version } from '../core/version.js';
 import { type Streams, exitCode, processStreams, reportError } from './print.js';
-
-const version = '0.1.0';
 
 function sectionOptions(command: Command): Command {
   return command
@@ -80,6 +79,10 @@ export function buildProgram(streams: Streams, setCode: (code: number) => void):
     .option('--json', 'print the result as JSON')
     .option('--csv <file>', 'write the station table to a CSV file')
     .option('--force', 'accept a roughness outside the usual range')
+    .option('--out <dir>', 'write report.html, result.json, stations.csv and charts/ into this folder')
+    .option('--sections <stations>', 'with --out: cross-section charts at these stations (comma-separated)')
+    .option('--energy-at <station>', 'with --out: the specific-energy and specific-force diagram at this station')
+    .option('--energy-flow <id>', 'with --out: the flow of that diagram (default: the first flow)')
     .action(async (model: string, options) => {
       const { runCommand } = await import('./commands/run.js');
       setCode(await runCommand(model, options, streams));

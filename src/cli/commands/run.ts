@@ -1,13 +1,16 @@
 /**
- * `gvf run MODEL.json`: validate the model file (every problem with its JSON path), compute every flow, print.
+ * `gvf run MODEL.json`: validate the model file (every problem with its JSON path), compute every flow, print;
+ * with `--out DIR`, also write the report, result.json, stations.csv and the charts into DIR (report stack
+ * loaded only then). A progress bar shows on stderr when it is a terminal.
  */
-import { InputError } from '../../core/errors.js';
+import { InputError, type Problem } from '../../core/errors.js';
 import { FlagReader } from '../../input/model/flags.js';
 import { ModelFileError } from '../../input/model/validate.js';
 import { readModelFile } from '../../input/model/parse.js';
 import { MethodName } from '../../input/model/types.js';
 import { runModel } from '../../run.js';
 import { type Streams, exitCode } from '../print.js';
+import { type ProgressStream, createProgress } from '../progress.js';
 import { type ReportOptions, printRun } from './report.js';
 
 export interface RunOptions extends ReportOptions {
@@ -15,26 +18,104 @@ export interface RunOptions extends ReportOptions {
   step?: string;
   compare?: boolean;
   force?: boolean;
+  /** output folder for the report, result.json, stations.csv and charts */
+  out?: string;
+  /** stations for cross-section charts, comma-separated */
+  sections?: string;
+  /** station of the specific-energy and specific-force diagram */
+  energyAt?: string;
+  /** flow of that diagram (default: the first flow) */
+  energyFlow?: string;
 }
 
-export async function runCommand(path: string, options: RunOptions, streams: Streams): Promise<number> {
+/** "120, 250.5" → [120, 250.5], each checked as a number. */
+function stationList(reader: FlagReader, flag: string, text: string | undefined): number[] | undefined {
+  if (text === undefined) return undefined;
+  const parts = text.split(',').map((p) => p.trim());
+  const out: number[] = [];
+  for (const part of parts) {
+    const x = reader.number(flag, part, 'any', false);
+    if (x !== undefined) out.push(x);
+  }
+  return out;
+}
+
+export async function runCommand(path: string, options: RunOptions, streams: Streams, progressStream: ProgressStream = process.stderr): Promise<number> {
   const reader = new FlagReader();
   const method = reader.choice('--method', options.method, Object.keys(MethodName) as MethodName[]);
   const step = reader.number('--step', options.step, 'positive', false);
+  const sections = stationList(reader, '--sections', options.sections);
+  const energyAt = reader.number('--energy-at', options.energyAt, 'any', false);
+  if (options.out !== undefined && options.out.trim() === '') reader.problems.push({ where: '--out', message: 'needs a folder name', value: options.out });
+  const reportFlags = ['sections', 'energyAt', 'energyFlow'] as const;
+  for (const key of reportFlags) {
+    if (options[key] !== undefined && options.out === undefined) {
+      reader.problems.push({ where: `--${key.replace(/[A-Z]/g, (c) => `-${c.toLowerCase()}`)}`, message: 'draws a chart of the report: use it with --out DIR' });
+    }
+  }
   reader.done();
   const model = readModelFile(path, { force: options.force === true });
+  const progress = createProgress(progressStream);
   let run;
   try {
     run = runModel(model, {
       ...(method === undefined ? {} : { method }),
       ...(step === undefined ? {} : { outputSpacing: step }),
       compare: options.compare === true,
+      onProgress: (done, total, flow) => progress.update(done, total, `flow ${flow}`),
     });
   } catch (error) {
+    progress.finish();
     // problems found while building the model's sections still belong to the model file
     if (error instanceof InputError && !(error instanceof ModelFileError)) throw new ModelFileError(path, error.problems);
     throw error;
   }
+  progress.finish();
+
+  if (options.out !== undefined) {
+    checkStations(run.result.flows, sections, energyAt, options.energyFlow);
+    const { writeRunOutputs } = await import('../../output/runFiles.js');
+    const charts = createProgress(progressStream);
+    let written;
+    try {
+      written = await writeRunOutputs(options.out, run, {
+        ...(sections === undefined ? {} : { sections }),
+        ...(energyAt === undefined ? {} : { energyAt: { station: energyAt, ...(options.energyFlow === undefined ? {} : { flow: options.energyFlow }) } }),
+        modelFile: path,
+        onProgress: (done, total, label) => charts.update(done, total, label),
+      });
+    } finally {
+      charts.finish();
+    }
+    printRun(run, options, streams);
+    for (const note of written.notes) streams.out(`note: ${note}`);
+    streams.out(`report written to ${written.report} (with result.json, stations.csv and ${written.charts.length} chart${written.charts.length === 1 ? '' : 's'} in ${options.out})`);
+    return exitCode.ok;
+  }
   printRun(run, options, streams);
   return exitCode.ok;
+}
+
+/** Stations asked for charts must lie on the channel, and the flow named must exist: checked before writing. */
+function checkStations(
+  flows: readonly { id: string; stations: readonly { station: number }[] }[],
+  sections: readonly number[] | undefined,
+  energyAt: number | undefined,
+  energyFlow: string | undefined,
+): void {
+  const all = flows.flatMap((f) => f.stations.map((s) => s.station));
+  if (all.length === 0) return;
+  const lo = Math.min(...all);
+  const hi = Math.max(...all);
+  const problems: Problem[] = [];
+  for (const x of sections ?? []) {
+    if (x < lo || x > hi) problems.push({ where: '--sections', message: `station ${x} is outside the channel (stations ${lo} to ${hi})`, value: x });
+  }
+  if (energyAt !== undefined && (energyAt < lo || energyAt > hi)) {
+    problems.push({ where: '--energy-at', message: `station ${energyAt} is outside the channel (stations ${lo} to ${hi})`, value: energyAt });
+  }
+  if (energyFlow !== undefined && !flows.some((f) => f.id === energyFlow)) {
+    problems.push({ where: '--energy-flow', message: `no flow named ${JSON.stringify(energyFlow)}; the flows are ${flows.map((f) => f.id).join(', ')}`, value: energyFlow });
+  }
+  if (problems.length > 0) throw new InputError(problems);
 }
