@@ -98,3 +98,12 @@ export const stopApproachFraction = 1e-9;
 export const stopApproachLimit = 200;
 /** Profile: a standard-step stretch that ends at critical depth is re-run at most this many times, each 16 times tighter. */
 export const stopRefinements = 3;
+/** Profile: the ODE method's step bound per integration leg (odex maxSteps), and its bound on switches between y(x) and x(y). */
+export const odeMaxSteps = 100_000;
+export const odeMaxPhases = 8;
+
+/* ---- Boundaries and structures (src/profile/reservoir.ts, src/structures/controls) ---- */
+/** Reservoir: the discharge drawn from a pool is found to this fraction of the critical-entrance discharge. */
+export const reservoirDischargeTolerance = 1e-7;
+/** Reservoir: the lower end of the discharge bracket is halved at most this many times. */
+export const reservoirBracketHalvings = 60;

@@ -9,6 +9,7 @@ export { integrators, referenceIntegrator } from './methods.js';
 export { standardStep, energyStep } from './standardStep.js';
 export { directStep } from './directStep.js';
 export { odeProfile, odeReference } from './ode.js';
+export { surveyedStretch, eddyLoss, flowLength, defaultContraction, defaultExpansion, type SurveyedRun } from './surveyed.js';
 export { pointState, depthGradient, type PointState } from './energy.js';
 export { meanFrictionSlope } from './frictionMean.js';
 export type { StretchSpec, StretchProfile, StretchStop, ProfileIntegrator, FlowRegime } from './stretch.js';

@@ -19,6 +19,8 @@ import {
   odeReferenceFraction,
   odeReferenceRelativeTolerance,
   odeRelativeTolerance,
+  odeMaxPhases as maxPhases,
+  odeMaxSteps,
   odeToleranceFraction,
 } from '../core/tolerances.js';
 import { depthGradient } from './energy.js';
@@ -57,8 +59,6 @@ class Output {
   }
 }
 
-const maxPhases = 8;
-const odeMaxSteps = 100_000;
 
 function solverFor(settings: OdeSettings, span: number): Solver {
   const solver = new Solver(1);
