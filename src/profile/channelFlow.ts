@@ -184,6 +184,12 @@ function sectionAt(input: ProfileInput, beds: ReturnType<typeof reachBeds>, stat
   return last.kind === 'surveyed' ? last.nodes[side === 'downstream' ? last.nodes.length - 1 : 0]!.section : last.section;
 }
 
+/** The upstream end of a channel: its station, bed elevation and section (for an entrance from a pool). */
+export function channelEntrance(input: ProfileInput): { station: number; bedElevation: number; section: HydraulicSection } {
+  const beds = reachBeds(input);
+  return { station: beds.origin, bedElevation: bedAt(input, beds, beds.origin), section: sectionAt(input, beds, beds.origin, 'downstream') };
+}
+
 /** Split the channel at the stations where its discharge changes. */
 function segmentsOf(input: ChannelInput): Segment[] {
   const beds = reachBeds(input);
