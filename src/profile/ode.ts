@@ -10,7 +10,7 @@
  * at critical depth (a brink, a break into a steep reach) leaves it cleanly. On a critical slope (yn ≈ yc)
  * the ratio stays finite and y(x) is integrated throughout.
  */
-import { Solver } from 'odex';
+import { Solver } from '../core/odex.js';
 import { NumericalError } from '../core/errors.js';
 import { brentRoot } from '../core/roots.js';
 import {

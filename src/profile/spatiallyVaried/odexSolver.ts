@@ -3,43 +3,13 @@
  * dense output, Hairer, Nørsett & Wanner, Solving Ordinary Differential Equations I, 2nd ed., 1993, §II.9),
  * for one scalar equation dy/dx = f(x, y) with output at chosen stations.
  *
- * The package ships TypeScript sources that do not compile under this project's strict settings, so it is
- * loaded through require() and given the small interface used here.
+ * The package itself is loaded through src/core/odex.ts.
  */
-import { createRequire } from 'node:module';
 import { NumericalError } from '../../core/errors.js';
+import { Outcome, Solver } from '../../core/odex.js';
 
-interface OdexRun {
-  y: number[];
-  outcome: number;
-  nStep: number;
-  nAccept: number;
-  nReject: number;
-  nEval: number;
-}
-
-interface OdexSolver {
-  denseOutput: boolean;
-  relativeTolerance: number;
-  absoluteTolerance: number;
-  maxSteps: number;
-  initialStepSize: number;
-  maxStepSize: number;
-  solve(
-    f: (x: number, y: number[]) => number[],
-    x: number,
-    y0: number[],
-    xEnd: number,
-    solOut: (nr: number, xOld: number, x: number, y: number[], dense?: (c: number, x: number) => number) => boolean | void,
-  ): OdexRun;
-}
-
-const require = createRequire(import.meta.url);
-const odex = require('odex') as { Solver: new (n: number) => OdexSolver };
-
-/** odex's outcome codes (its enum Outcome). */
-const converged = 0;
-const maxStepsExceeded = 1;
+const converged = Outcome.Converged;
+const maxStepsExceeded = Outcome.MaxStepsExceeded;
 
 export interface ScalarIntegration {
   /** y at each requested station reached, in the order given */
@@ -71,7 +41,7 @@ export function integrateScalar(
   xEnd: number,
   options: ScalarIntegrationOptions,
 ): ScalarIntegration {
-  const solver = new odex.Solver(1);
+  const solver = new Solver(1);
   solver.denseOutput = true;
   solver.relativeTolerance = options.relativeTolerance;
   solver.absoluteTolerance = options.absoluteTolerance;
