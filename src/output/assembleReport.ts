@@ -87,8 +87,13 @@ export function stationText(x: number): string {
 
 /** A file-name part: letters, digits, dot, dash and underscore only. */
 export function slug(text: string): string {
-  const s = text.trim().replace(/[^A-Za-z0-9._-]+/g, '-').replace(/^-+|-+$/g, '').replace(/^\.+/, '');
+  const s = text.trim().replace(/[^A-Za-z0-9._-]+/g, '-').replace(/\.{2,}/g, '.').replace(/^[-.]+|[-.]+$/g, '');
   return s === '' ? 'x' : s;
+}
+
+/** A station as a file-name part: "250", "54.906", "minus-20". */
+export function stationSlug(x: number): string {
+  return x < 0 ? `minus-${stationText(-x)}` : stationText(x);
 }
 
 /** The station entries of a flow at `station`: the upstream side is the first of a repeated station. */
@@ -263,7 +268,7 @@ function energyPlan(run: ModelRun, options: ReportOptions, notes: string[]): Pla
     const input = energyForceSamples({ hs: found.hs, discharge, depth, flow: flow.id, station: Number(station.toFixed(3)) });
     input.title = `Specific energy and force: flow ${flow.id}, station ${stationText(station)} ${u}`;
     return {
-      name: `energy-force-${slug(flow.id)}-at-${slug(stationText(station))}`,
+      name: `energy-force-${slug(flow.id)}-at-${stationSlug(station)}`,
       caption: `Specific energy and specific force for flow ${flow.id} (${Number(discharge.toPrecision(6))} ${result.units === 'US' ? 'ft³/s' : 'm³/s'}) at station ${stationText(station)} ${u} (${why}): the flow depth with its alternate depth (equal energy) and sequent depth (equal force), and critical depth.`,
       spec: energyForceChart(input),
     };
@@ -350,14 +355,14 @@ export function assembleReport(run: ModelRun, options: ReportOptions = {}): Asse
     const picked = [...new Set((options.sections ?? []).filter(Number.isFinite))];
     const range = stationRange(result);
     const sectionStations: { station: number; label: string; why: string; name: string }[] = [];
-    for (const x of picked) sectionStations.push({ station: x, label: `Station ${stationText(x)} ${u}`, why: 'station picked', name: `section-at-${slug(stationText(x))}` });
+    for (const x of picked) sectionStations.push({ station: x, label: `Station ${stationText(x)} ${u}`, why: 'station picked', name: `section-at-${stationSlug(x)}` });
     for (const s of structuresOf(run)) {
       sectionStations.push({ station: s.station, label: `${s.id} (${s.type}), station ${stationText(s.station)} ${u}`, why: `at structure ${s.id}, ${s.type}`, name: `section-${slug(s.id)}` });
     }
     if (sectionStations.length === 0 && result.flows[0]) {
       for (const r of result.flows[0].reaches.slice(0, defaultSectionLimit)) {
         const mid = Number(((r.from + r.to) / 2).toFixed(3));
-        sectionStations.push({ station: mid, label: `Station ${stationText(mid)} ${u}`, why: `middle of reach ${r.id}`, name: `section-at-${slug(stationText(mid))}` });
+        sectionStations.push({ station: mid, label: `Station ${stationText(mid)} ${u}`, why: `middle of reach ${r.id}`, name: `section-at-${stationSlug(mid)}` });
       }
     }
     for (const s of sectionStations) {

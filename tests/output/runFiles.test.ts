@@ -1,0 +1,113 @@
+/**
+ * writeRunOutputs(dir, run): every output file written, PNGs of the stated size, re-runs overwrite cleanly
+ * (stale charts of an earlier run removed, nothing else touched), a failed run leaves the previous files
+ * byte for byte, and the same run gives the same bytes. PNG sizes are read as the PNG specification lays
+ * the header out (W3C PNG 2nd ed. 2003 / ISO/IEC 15948: IHDR width and height, big-endian, at bytes 16 and 20).
+ */
+import { existsSync, mkdtempSync, readFileSync, readdirSync, writeFileSync } from 'node:fs';
+import { tmpdir } from 'node:os';
+import { join } from 'node:path';
+import { describe, expect, it } from 'vitest';
+import { renderChart } from '../../src/output/render.js';
+import { manifestName, resultJson, runFiles, writeRunOutputs } from '../../src/output/runFiles.js';
+import { size } from '../../src/output/charts/style.js';
+import { chuteRun } from './runFixtures.js';
+
+function pngSize(png: Buffer): { width: number; height: number } {
+  expect([...png.subarray(0, 8)]).toEqual([0x89, 0x50, 0x4e, 0x47, 0x0d, 0x0a, 0x1a, 0x0a]);
+  expect(png.subarray(12, 16).toString('ascii')).toBe('IHDR');
+  return { width: png.readUInt32BE(16), height: png.readUInt32BE(20) };
+}
+
+function snapshot(dir: string): Map<string, Buffer> {
+  const out = new Map<string, Buffer>();
+  const walk = (sub: string) => {
+    for (const e of readdirSync(join(dir, sub), { withFileTypes: true })) {
+      const rel = sub ? `${sub}/${e.name}` : e.name;
+      if (e.isDirectory()) walk(rel);
+      else out.set(rel, readFileSync(join(dir, rel)));
+    }
+  };
+  walk('');
+  return out;
+}
+
+const scratch = () => mkdtempSync(join(tmpdir(), 'gvf-out-'));
+
+describe('writeRunOutputs(dir, run)', () => {
+  const run = chuteRun();
+
+  it('writeRunOutputs(dir, run) writes the report, result.json, stations.csv and each chart as .vl.json, .svg and .png', async () => {
+    const dir = scratch();
+    const written = await writeRunOutputs(dir, run);
+    const files = snapshot(dir);
+    const charts = written.charts;
+    expect(charts).toContain('profile');
+    const expected = ['report.html', 'result.json', 'stations.csv', manifestName, ...charts.flatMap((c) => ['vl.json', 'svg', 'png'].map((x) => `charts/${c}.${x}`))];
+    expect([...files.keys()].sort()).toEqual(expected.sort());
+    for (const [name, bytes] of files) expect(bytes.length, name).toBeGreaterThan(0);
+    // the profile PNG: the chart size of the style module at its PNG scale
+    expect(pngSize(files.get('charts/profile.png')!)).toEqual({ width: size.profile.width * size.pngScale, height: size.profile.height * size.pngScale });
+    for (const c of charts) {
+      const svg = files.get(`charts/${c}.svg`)!.toString('utf8');
+      const m = /^<svg[^>]*\swidth="([\d.]+)"[^>]*\sheight="([\d.]+)"/.exec(svg)!;
+      expect(pngSize(files.get(`charts/${c}.png`)!), c).toEqual({ width: Math.round(Number(m[1]) * size.pngScale), height: Math.round(Number(m[2]) * size.pngScale) });
+      // the saved spec is the one drawn, so a user can restyle it
+      expect(JSON.parse(files.get(`charts/${c}.vl.json`)!.toString('utf8')).$schema).toContain('vega-lite');
+    }
+    expect(files.get('result.json')!.toString('utf8')).toBe(resultJson(run));
+    const html = files.get('report.html')!.toString('utf8');
+    expect((html.match(/<figure class="chart"/g) ?? []).length).toBe(charts.length);
+    expect(html).toContain('gvf 0.1.0');
+    expect(written.report).toBe(join(dir, 'report.html'));
+  });
+
+  it('writeRunOutputs(dir, run) overwrites cleanly: stale charts of an earlier run go, other files in the folder stay', async () => {
+    const dir = scratch();
+    await writeRunOutputs(dir, run, { sections: [120] });
+    expect(existsSync(join(dir, 'charts', 'section-at-120.svg'))).toBe(true);
+    writeFileSync(join(dir, 'my-notes.txt'), 'mine');
+    writeFileSync(join(dir, 'charts', 'my-sketch.svg'), '<svg/>');
+    const second = await writeRunOutputs(dir, run);
+    for (const x of ['vl.json', 'svg', 'png']) expect(existsSync(join(dir, 'charts', `section-at-120.${x}`))).toBe(false);
+    expect(second.removed.map((p) => p.slice(dir.length + 1)).sort()).toEqual(['charts/section-at-120.png', 'charts/section-at-120.svg', 'charts/section-at-120.vl.json']);
+    expect(readFileSync(join(dir, 'my-notes.txt'), 'utf8')).toBe('mine');
+    expect(readFileSync(join(dir, 'charts', 'my-sketch.svg'), 'utf8')).toBe('<svg/>');
+    expect(readdirSync(dir).some((n) => n.startsWith('.gvf-tmp-'))).toBe(false);
+  });
+
+  it('writeRunOutputs(dir, run) that fails while drawing a chart leaves the previous files byte for byte', async () => {
+    const dir = scratch();
+    await writeRunOutputs(dir, run);
+    const before = snapshot(dir);
+    const other = chuteRun({ flows: [{ id: 'other', discharge: 9 }] });
+    let calls = 0;
+    const failing = async (spec: Parameters<typeof renderChart>[0]) => {
+      if (++calls === 3) throw new Error('simulated render failure');
+      return renderChart(spec);
+    };
+    await expect(writeRunOutputs(dir, other, { render: failing })).rejects.toThrow('simulated render failure');
+    expect(calls).toBe(3);
+    const after = snapshot(dir);
+    expect([...after.keys()].sort()).toEqual([...before.keys()].sort());
+    for (const [name, bytes] of before) expect(after.get(name)!.equals(bytes), name).toBe(true);
+  });
+
+  it('runFiles(run) gives the same bytes for the same input: result.json, stations.csv, the report and every chart', async () => {
+    const a = await runFiles(chuteRun());
+    const b = await runFiles(chuteRun());
+    expect(a.files.map((f) => f.name)).toEqual(b.files.map((f) => f.name));
+    a.files.forEach((f, i) => expect(Buffer.from(f.content).equals(Buffer.from(b.files[i]!.content)), f.name).toBe(true));
+    const csv = a.files.find((f) => f.name === 'stations.csv')!.content as string;
+    const json = a.files.find((f) => f.name === 'result.json')!.content as string;
+    // no clock in the outputs: nothing that looks like a date or time of day
+    for (const text of [csv, json, a.files.find((f) => f.name === 'report.html')!.content as string]) expect(text).not.toMatch(/\b20\d\d-\d\d-\d\d|\d\d:\d\d:\d\d/);
+  });
+
+  it('runFiles(run) reports progress once per chart and once for the report', async () => {
+    const seen: string[] = [];
+    const out = await runFiles(run, { onProgress: (done, total, label) => seen.push(`${done}/${total} ${label}`) });
+    expect(seen).toHaveLength(out.charts.length + 1);
+    expect(seen[seen.length - 1]).toBe(`${out.charts.length + 1}/${out.charts.length + 1} report`);
+  });
+});
