@@ -36,6 +36,23 @@ export interface ProfileChartOptions {
   title?: string;
   /** draw stations decreasing to the right (for stationing that increases upstream) */
   reverseStations?: boolean;
+  /** ranges of water surface drawn as pale bands (e.g. a sensitivity envelope), in the colour of their flow */
+  bands?: ProfileBand[];
+  /** observed water levels (e.g. high-water marks) drawn as filled diamonds */
+  observations?: ProfileObservations;
+}
+
+/** A band from `low` to `high` along the stations, for one flow; `label` is its legend words. */
+export interface ProfileBand {
+  flow: string;
+  label: string;
+  rows: { station: number; low: number; high: number }[];
+}
+
+/** Observed points with one legend entry. */
+export interface ProfileObservations {
+  label: string;
+  points: { station: number; elevation: number; flow?: string }[];
 }
 
 export interface LineRow {
@@ -228,8 +245,24 @@ export function profileChart(run: RunResult, options: ProfileChartOptions = {}):
     );
   });
 
+  // Bands and observations (optional): in the flow's water colour, and in the text colour for observations.
+  const bandRows = (options.bands ?? []).flatMap((band) => {
+    const index = Math.max(0, flows.findIndex((f) => f.id === band.flow));
+    const series = key.add(band.label, pick(palette.water, index), dash.solid);
+    return band.rows
+      .filter((b) => isFiniteNumber(b.station) && isFiniteNumber(b.low) && isFiniteNumber(b.high))
+      .map((b, order) => ({ station: r(b.station), low: r(b.low), high: r(b.high), series, flow: band.flow, order }));
+  });
+  const observed = options.observations;
+  const observationRows = (observed?.points ?? [])
+    .filter((o) => isFiniteNumber(o.station) && isFiniteNumber(o.elevation))
+    .map((o) => ({ station: r(o.station), elevation: r(o.elevation), series: observed!.label, flow: o.flow ?? '' }));
+  if (observationRows.length) key.add(observed!.label, palette.text, dash.solid);
+
   const xr = extent(lines.map((l) => l.station)) ?? [0, 1];
   const yr = extent([
+    ...bandRows.flatMap((b) => [b.low, b.high]),
+    ...observationRows.map((o) => o.elevation),
     ...lines.map((l) => l.elevation),
     ...jumps.flatMap((j) => [j.toeElevation, j.sequentElevation]),
   ]) ?? [0, 1];
@@ -266,7 +299,14 @@ export function profileChart(run: RunResult, options: ProfileChartOptions = {}):
     scale: { domain: [r(yLow), r(yHigh)], nice: false, zero: false },
   } as const;
   const xPlain = { field: 'station', type: 'quantitative' } as const;
-  const colour = key.colour(words.legendTitle, { orient: 'bottom', columns: keyColumns, direction: 'horizontal', labelLimit: Math.max(120, Math.floor((width - 40) / keyColumns) - 14) });
+  const colour = key.colour(words.legendTitle, {
+    orient: 'bottom',
+    columns: keyColumns,
+    direction: 'horizontal',
+    labelLimit: Math.max(120, Math.floor((width - 40) / keyColumns) - 14),
+    // bands and observations add area and point marks; the key keeps drawing every entry as a line
+    ...(bandRows.length || observationRows.length ? { symbolType: 'stroke', symbolOpacity: 1 } : {}),
+  });
   const strokeDash = key.strokeDash(words.legendTitle);
 
   const title = options.title ?? (run.title ? `${run.title}: ${words.profileTitle.toLowerCase()}` : words.profileTitle);
@@ -283,6 +323,16 @@ export function profileChart(run: RunResult, options: ProfileChartOptions = {}):
       mark: { type: 'area', color: palette.waterBody, opacity: palette.waterBodyOpacity },
       encoding: { x: xPlain, y: { field: 'wsel', type: 'quantitative' }, y2: { field: 'bed' }, detail: { field: 'flow' } },
     },
+    ...(bandRows.length
+      ? [
+          {
+            name: 'bands',
+            data: { name: 'bands' },
+            mark: { type: 'area', opacity: 0.3 },
+            encoding: { x: xPlain, y: { field: 'low', type: 'quantitative' }, y2: { field: 'high' }, color: colour, detail: { field: 'series' } },
+          },
+        ]
+      : []),
     {
       name: 'lines',
       data: { name: 'lines' },
@@ -342,6 +392,14 @@ export function profileChart(run: RunResult, options: ProfileChartOptions = {}):
       },
     );
   }
+  if (observationRows.length) {
+    layer.push({
+      name: 'observations',
+      data: { name: 'observations' },
+      mark: { type: 'point', shape: 'diamond', filled: true, size: 60, opacity: 1 },
+      encoding: { x: xPlain, y: { field: 'elevation', type: 'quantitative' }, color: colour },
+    });
+  }
   if (labels.length) {
     layer.push({
       name: 'profile-labels',
@@ -359,7 +417,16 @@ export function profileChart(run: RunResult, options: ProfileChartOptions = {}):
     height,
     autosize: { type: 'fit', contains: 'padding' },
     config: chartConfig(),
-    datasets: { lines, ground, water, structures, jumps: jumpRows, labels },
+    datasets: {
+      lines,
+      ground,
+      water,
+      structures,
+      jumps: jumpRows,
+      labels,
+      ...(bandRows.length ? { bands: bandRows } : {}),
+      ...(observationRows.length ? { observations: observationRows } : {}),
+    },
     layer,
   };
   return spec as unknown as TopLevelSpec;
