@@ -99,6 +99,15 @@ export function issuesToProblems(
         problems.push(...issuesToProblems(deeper[0]!, schema, input, path));
         continue;
       }
+      // otherwise the branch whose keys fit the object best (fewest unknown keys at its top), when one does
+      const unknownAtTop = (branch: readonly z.core.$ZodIssue[]) =>
+        branch.reduce((k, i) => k + (i.code === 'unrecognized_keys' && i.path.length === 0 ? i.keys.length : 0), 0);
+      const counts = issue.errors.map(unknownAtTop);
+      const fewest = Math.min(...counts);
+      if (counts.filter((c) => c === fewest).length === 1 && counts.some((c) => c > fewest)) {
+        problems.push(...issuesToProblems(issue.errors[counts.indexOf(fewest)]!, schema, input, path));
+        continue;
+      }
     }
     problems.push({ where: formatPath(path), message: issue.message, value: valueAt(input, path) });
   }
@@ -152,10 +161,15 @@ function chooseOption(def: Def, value: unknown): z.ZodType | undefined {
       return literal !== undefined && (defOf(literal) as { values?: unknown[] }).values?.includes(tag);
     });
   }
-  return options.find((option) => {
+  const fitting = options.filter((option) => {
     const type = defOf(settle(option, value)).type;
     return (type === 'object') === (value !== null && typeof value === 'object' && !Array.isArray(value));
   });
+  if (fitting.length < 2 || value === null || typeof value !== 'object') return fitting[0];
+  // several object options: the one whose shape holds most of the value's keys
+  const keys = Object.keys(value);
+  const held = (option: z.ZodType) => keys.filter((k) => defOf(settle(option, value)).shape?.[k] !== undefined).length;
+  return fitting.reduce((best, option) => (held(option) > held(best) ? option : best));
 }
 
 function allowedKeys(root: z.ZodType, input: unknown, path: readonly PathSegment[]): string[] {

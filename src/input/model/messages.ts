@@ -140,6 +140,12 @@ export const noSuchSection = (name: unknown, known: readonly string[]): string =
 export const duplicateId = (what: string, id: string, firstIndex: number): string =>
   `the ${what} id ${JSON.stringify(id)} is used twice (first at index ${firstIndex}); ids must be unique`;
 
+export const reachKind = (): string =>
+  'a reach is either prismatic (keys "section", "length" and "slope") or surveyed (key "survey" with its files)';
+
+export const bothReachKinds = (): string =>
+  'give either "section", "length" and "slope" (a prismatic reach) or "survey" (a surveyed reach), not both';
+
 export const slopeTooLarge = (slope: unknown): string =>
   `expected a bed slope as a fraction with magnitude below ${slopeLimit} (0.001 means 0.1 %), got ${describeValue(slope)}`;
 

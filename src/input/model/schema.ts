@@ -10,6 +10,7 @@
 import * as z from 'zod';
 import * as msg from './messages.js';
 import type { Model } from './types.js';
+import { freeboardSchema, surveyReachSchema } from './surveySchema.js';
 import { FrictionAveragingName, FrictionName, MethodName, modelDefaults } from './types.js';
 
 const number = z.number();
@@ -98,7 +99,13 @@ const reach = z.strictObject({
   section: z.string().describe('the name of a section in "sections"'),
   length: positive.describe('length along the channel'),
   slope: number.describe('bed slope as a fraction, falling downstream (0.001 = 0.1 %); 0 horizontal, negative adverse'),
+  bankHeight: positive.optional().describe('height of the bank (or lining) tops above the bed, both sides, for the freeboard check'),
 });
+
+/** A prismatic reach (section, length, slope) or a surveyed one (survey files); the keys given tell which. */
+const anyReach = z
+  .union([reach, surveyReachSchema], { error: () => msg.reachKind() })
+  .describe('a prismatic reach (section, length, slope) or a surveyed reach (survey)');
 
 const flow = z.strictObject({
   id: id.describe('a name for the flow, e.g. "100-year", unique in the model'),
@@ -130,7 +137,7 @@ export const modelSchema = z
     title: z.string().optional().describe('job title, shown on results and reports'),
     units: z.enum(['SI', 'US']).describe('SI (m, m³/s) or US customary (ft, ft³/s); every number in the file is in these units'),
     sections: z.record(z.string().min(1), sectionSchema).describe('named cross-sections'),
-    reaches: z.array(reach).min(1).describe('reaches from upstream to downstream'),
+    reaches: z.array(anyReach).min(1).describe('reaches from upstream to downstream'),
     downstreamBedElevation: number
       .default(modelDefaults.downstreamBedElevation)
       .describe('bed elevation at the downstream end of the last reach'),
@@ -157,3 +164,4 @@ export function modelJsonSchema(): Record<string, unknown> {
   const schema = z.toJSONSchema(modelSchema, { io: 'input', target: 'draft-2020-12' }) as Record<string, unknown>;
   return { ...schema, title: 'gvf model file' };
 }
+    freeboard: freeboardSchema.optional(),

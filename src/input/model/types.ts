@@ -6,6 +6,7 @@
  * schema/gvf-model.schema.json is generated from it for editors. Every length is in the model's units.
  */
 import type { UnitSystem } from '../../core/units.js';
+import type { FreeboardSpec, SurveyReachSpec } from './survey.js';
 
 export const FrictionName = { manning: 'manning', chezy: 'chezy', 'darcy-weisbach': 'darcy-weisbach' } as const;
 export type FrictionName = keyof typeof FrictionName;
@@ -82,6 +83,8 @@ export interface ReachSpec {
   length: number;
   /** bed slope S0 as a fraction (rise over run, positive falling downstream; 0 horizontal, negative adverse) */
   slope: number;
+  /** height of the bank (or lining) tops above the bed, both sides, for the freeboard check */
+  bankHeight?: number;
 }
 
 export interface FlowSpec {
@@ -120,8 +123,8 @@ export interface Model {
   title?: string;
   units: UnitSystem;
   sections: Record<string, SectionSpec>;
-  /** listed from upstream to downstream */
-  reaches: ReachSpec[];
+  /** listed from upstream to downstream: prismatic reaches, or reaches described by a survey (survey.ts) */
+  reaches: Array<ReachSpec | SurveyReachSpec>;
   /** bed elevation at the downstream end of the last reach (default 0) */
   downstreamBedElevation: number;
   flows: FlowSpec[];
@@ -142,3 +145,5 @@ export const modelDefaults = {
   method: 'standard-step',
   frictionAveraging: 'conveyance',
 } as const satisfies Partial<Model>;
+  /** the freeboard each station needs above the water surface to its bank (or lining) tops */
+  freeboard?: FreeboardSpec;
