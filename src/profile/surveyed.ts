@@ -11,10 +11,29 @@
  * practice does, and the run stops there (the engine decides from the other regime's profile what lies beyond:
  * a jump, or a control; where nothing does, it warns).
  */
+import { HydraulicError } from '../core/errors.js';
 import type { FrictionAveraging, SurveyNode } from './types.js';
 import { pointState, type PointState } from './energy.js';
 import { energyStep } from './standardStep.js';
 import type { FlowRegime } from './stretch.js';
+
+/**
+ * The energy balance into a surveyed section needs a water surface above the section's lower end point: the
+ * section must be extended (it is never extrapolated). `station` is the node's, in the engine's stationing.
+ */
+export class SectionTopReached extends HydraulicError {
+  readonly station: number;
+  /** the depth of the section's lower end point above its lowest point */
+  readonly maxDepth: number;
+  constructor(station: number, maxDepth: number) {
+    super(
+      `the water surface at station ${station} would rise above the lower end point of its section (depth ${maxDepth} above the lowest point): ` +
+        'the section must be extended',
+    );
+    this.station = station;
+    this.maxDepth = maxDepth;
+  }
+}
 
 export const defaultContraction = 0.1;
 export const defaultExpansion = 0.3;
@@ -79,6 +98,7 @@ export function surveyedStretch(
     const upstreamNode = nodes[u]!;
     const loss = (s1: PointState, s2: PointState) => (b > a ? eddyLoss(upstreamNode, s1, s2) : eddyLoss(upstreamNode, s2, s1));
     const outcome = energyStep(spec, 0, known, delta, known.depth, loss);
+    if (outcome.stop?.reason === 'full') throw new SectionTopReached(nodes[b]!.station, nodes[b]!.section.section.maxDepth);
     if (!outcome.state) {
       depths.push(criticals[b]!);
       return { depths, setToCritical: b, steps: k };
