@@ -1,0 +1,145 @@
+/**
+ * `gvf run MODEL --out DIR`, run as a user runs it (the built CLI in a child process, stderr a pipe):
+ * every file written and non-empty, PNGs of the stated size, the same bytes on a second run, result.json the
+ * `--json` structure, user text escaped in the report, no progress bar when stderr is not a terminal (and one
+ * when it is), and bad input refused with exit code 2 leaving the output folder as it was.
+ * The models are invented scenarios (tests/output/runFixtures.ts).
+ */
+import { spawnSync } from 'node:child_process';
+import { existsSync, mkdirSync, mkdtempSync, readFileSync, readdirSync, writeFileSync } from 'node:fs';
+import { tmpdir } from 'node:os';
+import { join } from 'node:path';
+import { beforeAll, describe, expect, it } from 'vitest';
+import { chuteModelText } from '../output/runFixtures.js';
+import { ensureBuilt, gvf, mainJs, root } from './built.js';
+
+beforeAll(() => ensureBuilt(), 300_000);
+
+const scratch = () => mkdtempSync(join(tmpdir(), 'gvf-cli-out-'));
+function model(dir: string, overrides: Record<string, unknown> = {}): string {
+  const path = join(dir, 'model.json');
+  writeFileSync(path, chuteModelText(overrides));
+  return path;
+}
+
+function pngSize(png: Buffer): { width: number; height: number } {
+  // PNG (W3C 2nd ed. 2003): signature, then IHDR with big-endian width and height at bytes 16 and 20
+  expect(png.subarray(1, 4).toString('ascii')).toBe('PNG');
+  return { width: png.readUInt32BE(16), height: png.readUInt32BE(20) };
+}
+
+function files(dir: string): Map<string, Buffer> {
+  const out = new Map<string, Buffer>();
+  const walk = (sub: string) => {
+    for (const e of readdirSync(join(dir, sub), { withFileTypes: true })) {
+      const rel = sub ? `${sub}/${e.name}` : e.name;
+      if (e.isDirectory()) walk(rel);
+      else out.set(rel, readFileSync(join(dir, rel)));
+    }
+  };
+  walk('');
+  return out;
+}
+
+describe('gvf run MODEL --out DIR', () => {
+  it('gvf run --out writes report.html, result.json, stations.csv and every chart, says where, and prints nothing on a piped stderr', () => {
+    const work = scratch();
+    const out = join(work, 'out');
+    const run = gvf(['run', model(work), '--out', out, '--sections', '120']);
+    expect(run.code).toBe(0);
+    expect(run.stderr).toBe(''); // no progress bar: stderr is a pipe here
+    expect(run.stdout).toContain(`report written to ${join(out, 'report.html')}`);
+    const written = files(out);
+    for (const name of ['report.html', 'result.json', 'stations.csv', 'charts/profile.svg', 'charts/profile.png', 'charts/profile.vl.json', 'charts/section-at-120.png', 'charts/rating.png']) {
+      expect(written.has(name), name).toBe(true);
+      expect(written.get(name)!.length, name).toBeGreaterThan(100);
+    }
+    // 900 × 480 CSS px at 2 PNG pixels per CSS pixel (the style module's sizes)
+    expect(pngSize(written.get('charts/profile.png')!)).toEqual({ width: 1800, height: 960 });
+    expect(pngSize(written.get('charts/section-at-120.png')!)).toEqual({ width: 1280, height: 760 });
+    // result.json is exactly what --json prints
+    const json = gvf(['run', model(work), '--json']);
+    expect(written.get('result.json')!.toString('utf8')).toBe(json.stdout);
+    expect(written.get('stations.csv')!.toString('utf8').split('\n')[0]).toMatch(/^flow,discharge_m3_s,station_m,/);
+  });
+
+  it('gvf run --out twice gives byte-identical result.json, stations.csv and charts', () => {
+    const work = scratch();
+    const a = join(work, 'a');
+    const b = join(work, 'b');
+    expect(gvf(['run', model(work), '--out', a]).code).toBe(0);
+    expect(gvf(['run', model(work), '--out', b]).code).toBe(0);
+    const fa = files(a);
+    const fb = files(b);
+    expect([...fa.keys()].sort()).toEqual([...fb.keys()].sort());
+    for (const [name, bytes] of fa) {
+      // the report names the model file given, which is the same path here, so it too is identical
+      expect(bytes.equals(fb.get(name)!), name).toBe(true);
+    }
+  });
+
+  it('gvf run --out escapes user text: a model title with markup shows as text in report.html and the charts', () => {
+    const work = scratch();
+    const out = join(work, 'out');
+    const title = 'Invented <script>window.x=1</script> & <b>bold</b> "channel"';
+    expect(gvf(['run', model(work, { title, flows: [{ id: '<i>q</i>', discharge: 8 }] }), '--out', out]).code).toBe(0);
+    const html = readFileSync(join(out, 'report.html'), 'utf8');
+    expect(html).not.toContain('<script>');
+    expect(html).not.toContain('<b>bold</b>');
+    expect(html).not.toContain('<i>q</i>');
+    expect(html).toContain('Invented &lt;script&gt;window.x=1&lt;/script&gt; &amp; &lt;b&gt;bold&lt;/b&gt;');
+    const svg = readFileSync(join(out, 'charts', 'profile.svg'), 'utf8');
+    expect(svg).not.toContain('<script>');
+    expect(svg).toContain('&lt;script&gt;');
+  });
+
+  it('gvf run --out on bad input exits 2 and leaves the output folder as it was', () => {
+    const work = scratch();
+    const out = join(work, 'out');
+    expect(gvf(['run', model(work), '--out', out]).code).toBe(0);
+    const before = files(out);
+    const bad = join(work, 'bad.json');
+    writeFileSync(bad, chuteModelText({ reaches: [{ id: 'x', section: 'chute', length: -5, slope: 0.01 }] }));
+    const cases = [
+      ['run', bad, '--out', out],
+      ['run', model(work), '--out', out, '--sections', '120,abc'],
+      ['run', model(work), '--out', out, '--sections', '9999'],
+      ['run', model(work), '--out', out, '--energy-at', '100', '--energy-flow', 'nope'],
+    ];
+    for (const args of cases) {
+      const r = gvf(args);
+      expect(r.code, args.join(' ')).toBe(2);
+      expect(r.stderr).not.toMatch(/\n\s+at /); // no stack trace
+    }
+    expect(gvf(cases[2]!).stderr).toContain('--sections: station 9999 is outside the channel');
+    const after = files(out);
+    expect([...after.keys()].sort()).toEqual([...before.keys()].sort());
+    for (const [name, bytes] of before) expect(after.get(name)!.equals(bytes), name).toBe(true);
+  });
+
+  it('gvf run --sections without --out says it needs --out', () => {
+    const work = scratch();
+    const r = gvf(['run', model(work), '--sections', '120']);
+    expect(r.code).toBe(2);
+    expect(r.stderr).toContain('--sections: draws a chart of the report: use it with --out DIR');
+  });
+
+  it('gvf run --out into a new folder that cannot be made exits with an error and writes nothing', () => {
+    const work = scratch();
+    writeFileSync(join(work, 'file'), 'x');
+    const r = gvf(['run', model(work), '--out', join(work, 'file', 'out')]);
+    expect(r.code).not.toBe(0);
+    expect(r.stderr).toMatch(/^gvf: /);
+    expect(readFileSync(join(work, 'file'), 'utf8')).toBe('x');
+  });
+
+  it.skipIf(!existsSync('/usr/bin/script'))('gvf run --out on a terminal (a pseudo-terminal from script(1)) shows a progress bar on stderr and wipes it', () => {
+    const work = scratch();
+    mkdirSync(join(work, 'out'));
+    const command = `${JSON.stringify(process.execPath)} ${JSON.stringify(mainJs)} run ${JSON.stringify(model(work))} --out ${JSON.stringify(join(work, 'out'))} >/dev/null`;
+    const r = spawnSync('/usr/bin/script', ['-qec', command, '/dev/null'], { cwd: root, encoding: 'utf8' });
+    expect(r.status).toBe(0);
+    expect(r.stdout).toMatch(/\rgvf [█░]+ \d+\/\d+ /);
+    expect(r.stdout).toMatch(/\r +\r/);
+  });
+});
