@@ -158,6 +158,36 @@ export const depthAboveCrown = (depth: number, crown: number, unit: string): str
 export const depthAbovePoints = (depth: number, limit: number, unit: string): string =>
   `the depth ${depth} ${unit} lies above the section's lower end point (at most ${round(limit)} ${unit}); extend the section`;
 
+// ---- structures, rating curves, reservoirs, flow changes ----------------------------------------------
+
+export const ratingNeedsOne = (): string => 'a rating curve needs either "table" ([[stage, discharge], ...]) or "file" (a CSV beside the model), not both and not neither';
+
+export const dischargeRequired = (): string => 'missing: expected the discharge Q (a number greater than 0); only a reservoir upstream boundary lets gvf find it';
+
+export const dischargeWithReservoir = (): string =>
+  'a reservoir upstream boundary fixes the discharge: leave "discharge" out (gvf finds it from the pool elevation), or give this flow its own "poolElevation"';
+
+export const poolWithoutReservoir = (): string => '"poolElevation" applies only where the upstream boundary is a reservoir ({"type": "reservoir", ...})';
+
+export const unknownFlowId = (id: string, known: readonly string[]): string =>
+  `no flow has the id ${JSON.stringify(id)}${suggestion(id, known)}; the flows are ${quoted(known)}`;
+
+export const missingFlowValue = (id: string): string => `no value for flow ${JSON.stringify(id)}: give one for every flow, or one number for all`;
+
+export const structureOutside = (from: number, to: number): string =>
+  `a structure must lie inside the channel (between stations ${round(from)} and ${round(to)}); only a free overfall may sit at the downstream end`;
+
+export const overfallPlacement = (end: number): string =>
+  `a free overfall sits at the downstream end (station ${round(end)}) or, inside the channel, at a drop: give "bedDrop" greater than 0 there`;
+
+export const overfallWithBoundary = (): string =>
+  'a free overfall at the downstream end is the downstream control (critical depth at the brink): leave out boundaries.downstream, or give {"type": "critical"}';
+
+export const structuresTooClose = (other: string): string => `two structures at the same station (this one and ${JSON.stringify(other)}); give them stations apart`;
+
+export const gateWidthNeeded = (shape: string): string =>
+  `a sluice gate in a ${shape} channel needs its "width" (the default comes only from a rectangular channel)`;
+
 // ---- command-line flags ------------------------------------------------------------------------------
 
 export const flagRequired = (what: string): string => `required: ${what}`;

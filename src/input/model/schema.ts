@@ -109,7 +109,8 @@ const anyReach = z
 
 const flow = z.strictObject({
   id: id.describe('a name for the flow, e.g. "100-year", unique in the model'),
-  discharge: positive.describe('discharge Q'),
+  discharge: positive.optional().describe('discharge Q entering at the upstream end (leave it out where the upstream boundary is a reservoir: it is found)'),
+  poolElevation: number.optional().describe('with a reservoir upstream: this flow\'s pool elevation (default the boundary\'s)'),
 });
 
 const boundary = z
@@ -120,6 +121,133 @@ const boundary = z
     z.strictObject({ type: z.literal('critical') }),
   ])
   .describe('a control: a depth, a stage (water-surface elevation), normal depth, or critical depth');
+
+const ratingBoundary = z.strictObject({
+  type: z.literal('rating'),
+  table: z.array(pair('stage', 'discharge')).optional().describe('[[stage, discharge], ...], stage and discharge rising together; give this or file'),
+  file: z.string().optional().describe('a CSV file with stage and discharge columns, relative to the model file; give this or table'),
+});
+
+const reservoirBoundary = z.strictObject({
+  type: z.literal('reservoir'),
+  poolElevation: number.describe('water-surface elevation of the pool (still water)'),
+  entranceLoss: nonNegative.optional().describe('entrance loss coefficient ke, times the entrance velocity head (default 0)'),
+});
+
+const upstreamBoundary = z
+  .discriminatedUnion('type', [...boundary.options, reservoirBoundary])
+  .describe('a control at the upstream end: a depth, a stage, normal or critical depth, or a reservoir (the discharge is then found from the pool)');
+
+const downstreamBoundary = z
+  .discriminatedUnion('type', [...boundary.options, ratingBoundary])
+  .describe('a control at the downstream end: a depth, a stage, normal or critical depth, or a stage–discharge rating curve');
+
+const perFlow = (description: string, sign: 'any' | 'positive') =>
+  z
+    .union([sign === 'positive' ? positive : number, z.record(z.string().min(1), sign === 'positive' ? positive : number)], {
+      error: (issue) => msg.expected(`one ${sign === 'positive' ? 'positive ' : ''}number for every flow, or an object of numbers by flow id`, issue.input),
+    })
+    .describe(description);
+
+const flowChange = z.strictObject({
+  id: z.string().optional().describe('a name for the inflow (tributary, inlet), for messages'),
+  station: number.describe('where the discharge joins (it applies downstream of this station)'),
+  addedDischarge: perFlow('discharge added there (negative: withdrawn): one number, or {"flow id": number, ...}', 'any'),
+});
+
+const lateral = z.strictObject({
+  id: z.string().optional().describe('a name for the stretch, for messages'),
+  from: number.describe('station where the lateral inflow begins'),
+  to: number.describe('station where it ends (within the same prismatic reach)'),
+  inflowPerLength: perFlow('discharge entering per unit length of channel: one number, or {"flow id": number, ...}', 'positive'),
+});
+
+const structureCommon = {
+  id: id.describe('a name for the structure, unique in the model'),
+  station: number.describe('station along the channel (inside it; a free overfall may sit at the downstream end)'),
+  description: z.string().optional().describe('free text for the report'),
+  bedDrop: nonNegative.optional().describe('the bed just downstream lies this much lower (default 0; a culvert: barrel length × slope)'),
+};
+
+const structure = z
+  .discriminatedUnion('type', [
+    z.strictObject({
+      type: z.literal('sharp-crested-weir'),
+      ...structureCommon,
+      crestElevation: number.describe('crest elevation'),
+      crestLength: positive.describe('crest length across the flow'),
+      approachWidth: positive.optional().describe('approach channel width B (default the crest length: full width)'),
+      coefficientMethod: z.enum(['kindsvater-carter', 'rehbock']).optional().describe('coefficient equation (default kindsvater-carter)'),
+    }),
+    z.strictObject({
+      type: z.literal('v-notch-weir'),
+      ...structureCommon,
+      vertexElevation: number.describe('elevation of the lowest point of the notch'),
+      notchAngle: positive.describe('notch angle in degrees (25–100 with the built-in coefficients)'),
+      coefficient: positive.optional().describe('effective coefficient Ce (default from the angle)'),
+      headCorrection: nonNegative.optional().describe('head correction kh, a length (default from the angle)'),
+    }),
+    z.strictObject({
+      type: z.literal('broad-crested-weir'),
+      ...structureCommon,
+      crestElevation: number.describe('crest elevation'),
+      crestWidth: positive.describe('crest width across the flow'),
+      coefficient: positive.optional().describe('ratio of actual to ideal discharge (default 0.85)'),
+    }),
+    z.strictObject({
+      type: z.literal('road-overflow'),
+      ...structureCommon,
+      crestElevation: number.describe('low point of the road crest'),
+      overtoppedLength: positive.describe('length of roadway overtopped, across the flow'),
+      roadWidth: positive.optional().describe('road crest width in the direction of flow'),
+      coefficient: positive.optional().describe('Cr in Q = Cr·L·H^1.5, length^½/s (default the paved-road value)'),
+    }),
+    z.strictObject({
+      type: z.literal('sluice-gate'),
+      ...structureCommon,
+      opening: positive.describe('gate opening above the floor'),
+      width: positive.optional().describe('gate width (default the bottom width of a rectangular channel there)'),
+      contractionCoefficient: positive.optional().describe('contraction coefficient Cc (default 0.61)'),
+    }),
+    z.strictObject({
+      type: z.literal('culvert'),
+      ...structureCommon,
+      barrel: z
+        .discriminatedUnion('shape', [
+          z.strictObject({ shape: z.literal('circular'), diameter: positive.describe('inside diameter') }),
+          z.strictObject({ shape: z.literal('box'), span: positive.describe('inside width'), rise: positive.describe('inside height') }),
+        ])
+        .describe('the barrel: circular (diameter) or box (span, rise)'),
+      length: positive.describe('barrel length'),
+      slope: number.describe('barrel slope as a fraction, falling downstream'),
+      n: positive.describe("Manning's n of the barrel"),
+      inlet: z
+        .enum([
+          'concrete-pipe-square-edge-headwall',
+          'concrete-pipe-groove-end-headwall',
+          'concrete-pipe-groove-end-projecting',
+          'corrugated-pipe-projecting',
+          'corrugated-pipe-mitered',
+          'box-wingwalls-30-75',
+          'box-wingwalls-90-15',
+        ])
+        .describe('entrance type (inlet-control coefficients, default entrance loss)'),
+      entranceLoss: nonNegative.optional().describe('entrance loss coefficient ke (default from the entrance type)'),
+      barrels: positive.optional().describe('identical barrels side by side (default 1)'),
+    }),
+    z.strictObject({ type: z.literal('free-overfall'), ...structureCommon }),
+    z.strictObject({
+      type: z.literal('spillway'),
+      ...structureCommon,
+      crestElevation: number.describe('crest elevation'),
+      crestLength: positive.describe('crest length'),
+      coefficient: positive.optional().describe('C in Q = C·L·He^1.5, length^½/s (default the curve against crest height over head)'),
+      apronLength: positive.optional().describe('apron length below the toe, for the jump check'),
+      apronWidth: positive.optional().describe('apron width (default the crest length)'),
+      chuteLoss: nonNegative.optional().describe('chute loss, times the toe velocity head (default 0)'),
+    }),
+  ])
+  .describe('a structure along the channel: weir, gate, culvert, drop or spillway');
 
 const method = z
   .enum(Object.keys(MethodName) as [MethodName, ...MethodName[]])
@@ -143,14 +271,19 @@ export const modelSchema = z
       .describe('bed elevation at the downstream end of the last reach'),
     flows: z.array(flow).min(1).describe('the flows to compute, one profile each'),
     boundaries: z
-      .strictObject({ upstream: boundary.optional(), downstream: boundary.optional() })
+      .strictObject({ upstream: upstreamBoundary.optional(), downstream: downstreamBoundary.optional() })
       .default({ ...modelDefaults.boundaries })
       .describe(
         'controls at the two ends; one the flow regime does not need is ignored with a note; a missing one is assumed (normal depth, or critical depth at a free overfall or pool entrance) with a note',
       ),
     method,
+    freeboard: freeboardSchema.optional(),
     frictionAveraging,
     outputSpacing: positive.optional().describe('output spacing along the channel (default at most 1/100 of its length)'),
+    description: z.string().optional().describe('free text: what the model is (say here when a scenario or its data are invented)'),
+    structures: z.array(structure).optional().describe('weirs, gates, culverts, drops and spillways along the channel'),
+    flowChanges: z.array(flowChange).optional().describe('discharges joining (tributaries, inlets) or leaving the channel at stations'),
+    lateralInflow: z.array(lateral).optional().describe('lateral inflow along stretches (side-channel spillway, gutter, collector channel)'),
   })
   .describe('a gvf model: channel sections, reaches, flows and controls');
 
@@ -164,4 +297,3 @@ export function modelJsonSchema(): Record<string, unknown> {
   const schema = z.toJSONSchema(modelSchema, { io: 'input', target: 'draft-2020-12' }) as Record<string, unknown>;
   return { ...schema, title: 'gvf model file' };
 }
-    freeboard: freeboardSchema.optional(),

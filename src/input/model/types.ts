@@ -89,7 +89,10 @@ export interface ReachSpec {
 
 export interface FlowSpec {
   id: string;
-  discharge: number;
+  /** required, except where the upstream boundary is a reservoir (the discharge is then found) */
+  discharge?: number;
+  /** with a reservoir upstream: this flow's pool elevation (default the boundary's) */
+  poolElevation?: number;
 }
 
 export type BoundarySpec =
@@ -99,11 +102,159 @@ export type BoundarySpec =
   | { type: 'critical' };
 export type BoundaryType = BoundarySpec['type'];
 
+/** A downstream stage–discharge rating curve: inline [[stage, discharge], ...] or a CSV file beside the model. */
+export interface RatingBoundarySpec {
+  type: 'rating';
+  /** exactly one of table and file (checked by validation) */
+  table?: Array<[number, number]>;
+  file?: string;
+}
+
+/** A reservoir or pond upstream: the discharge is found from the pool elevation (flows then give no discharge). */
+export interface ReservoirBoundarySpec {
+  type: 'reservoir';
+  poolElevation: number;
+  /** entrance loss coefficient ke, a multiple of the entrance velocity head (default 0) */
+  entranceLoss?: number;
+}
+
+export type UpstreamBoundarySpec = BoundarySpec | ReservoirBoundarySpec;
+export type DownstreamBoundarySpec = BoundarySpec | RatingBoundarySpec;
+
 /** A missing end is left to the engine, which assumes what the physics suggests and says so in a note. */
 export interface BoundariesSpec {
-  upstream?: BoundarySpec;
-  downstream?: BoundarySpec;
+  upstream?: UpstreamBoundarySpec;
+  downstream?: DownstreamBoundarySpec;
 }
+
+/** A discharge that joins (or, negative, leaves) the channel at a station: a tributary, an inlet, a diversion. */
+export interface FlowChangeSpec {
+  /** a name for the inflow, for messages */
+  id?: string;
+  station: number;
+  /** the discharge added there: one number for every flow, or one per flow id */
+  addedDischarge: number | Record<string, number>;
+}
+
+/** Lateral inflow along a stretch (side-channel spillway, gutter, collector channel), per unit length of channel. */
+export interface LateralInflowSpec {
+  id?: string;
+  from: number;
+  to: number;
+  /** discharge entering per unit length: one number for every flow, or one per flow id */
+  inflowPerLength: number | Record<string, number>;
+}
+
+interface StructureCommon {
+  id: string;
+  /** station of the structure along the channel (inside it; a free overfall may sit at the downstream end) */
+  station: number;
+  /** free text for the report */
+  description?: string;
+  /** the channel bed falls by this much across the structure (default 0; a culvert: barrel length × slope) */
+  bedDrop?: number;
+}
+
+export interface SharpCrestedWeirSpec extends StructureCommon {
+  type: 'sharp-crested-weir';
+  crestElevation: number;
+  crestLength: number;
+  /** width of the approach channel B (default the crest length: a full-width weir) */
+  approachWidth?: number;
+  /** coefficient equation (default kindsvater-carter) */
+  coefficientMethod?: 'kindsvater-carter' | 'rehbock';
+}
+
+export interface VNotchWeirSpec extends StructureCommon {
+  type: 'v-notch-weir';
+  /** elevation of the notch's lowest point */
+  vertexElevation: number;
+  /** notch angle in degrees */
+  notchAngle: number;
+  /** effective coefficient Ce (default from the angle) */
+  coefficient?: number;
+  /** head correction kh, a length (default from the angle) */
+  headCorrection?: number;
+}
+
+export interface BroadCrestedWeirSpec extends StructureCommon {
+  type: 'broad-crested-weir';
+  crestElevation: number;
+  /** crest width across the flow */
+  crestWidth: number;
+  /** ratio of actual to ideal discharge (default 0.85) */
+  coefficient?: number;
+}
+
+export interface RoadOverflowSpec extends StructureCommon {
+  type: 'road-overflow';
+  /** low point of the road crest */
+  crestElevation: number;
+  /** length of roadway overtopped, across the flow */
+  overtoppedLength: number;
+  /** width of the road crest in the direction of flow */
+  roadWidth?: number;
+  /** Cr in Q = Cr·L·H^1.5, length^½/s (default the paved-road value) */
+  coefficient?: number;
+}
+
+export interface SluiceGateSpec extends StructureCommon {
+  type: 'sluice-gate';
+  /** gate opening above the floor */
+  opening: number;
+  /** width of the gate (default the bottom width of a rectangular channel there) */
+  width?: number;
+  /** contraction coefficient Cc (default 0.61) */
+  contractionCoefficient?: number;
+}
+
+export type CulvertBarrelSpec = { shape: 'circular'; diameter: number } | { shape: 'box'; span: number; rise: number };
+
+export interface CulvertSpec extends StructureCommon {
+  type: 'culvert';
+  barrel: CulvertBarrelSpec;
+  /** barrel length */
+  length: number;
+  /** barrel slope, falling downstream */
+  slope: number;
+  /** Manning's n of the barrel */
+  n: number;
+  /** entrance type (inlet-control coefficients and default entrance loss) */
+  inlet: string;
+  /** entrance loss coefficient ke (default from the entrance type) */
+  entranceLoss?: number;
+  /** identical barrels side by side (default 1) */
+  barrels?: number;
+}
+
+export interface FreeOverfallSpec extends StructureCommon {
+  type: 'free-overfall';
+}
+
+export interface SpillwaySpec extends StructureCommon {
+  type: 'spillway';
+  crestElevation: number;
+  crestLength: number;
+  /** C in Q = C·L·He^1.5, length^½/s (default the curve against crest height over head) */
+  coefficient?: number;
+  /** length of the apron below the toe, for the jump check */
+  apronLength?: number;
+  /** apron width (default the crest length) */
+  apronWidth?: number;
+  /** chute loss as a multiple of the toe velocity head (default 0) */
+  chuteLoss?: number;
+}
+
+export type StructureSpec =
+  | SharpCrestedWeirSpec
+  | VNotchWeirSpec
+  | BroadCrestedWeirSpec
+  | RoadOverflowSpec
+  | SluiceGateSpec
+  | CulvertSpec
+  | FreeOverfallSpec
+  | SpillwaySpec;
+export type StructureType = StructureSpec['type'];
 
 export const MethodName = { 'standard-step': 'standard-step', 'direct-step': 'direct-step', ode: 'ode' } as const;
 export type MethodName = keyof typeof MethodName;
@@ -132,10 +283,20 @@ export interface Model {
   boundaries: BoundariesSpec;
   /** default standard-step */
   method: MethodName;
+  /** the freeboard each station needs above the water surface to its bank (or lining) tops */
+  freeboard?: FreeboardSpec;
   /** friction-slope averaging of the standard step (default conveyance) */
   frictionAveraging: FrictionAveragingName;
   /** output spacing along the channel; default: at most 1/100 of the total length */
   outputSpacing?: number;
+  /** free text: what the model is (say here when a scenario is invented) */
+  description?: string;
+  /** weirs, gates, culverts, drops, spillways along the channel */
+  structures?: StructureSpec[];
+  /** discharges joining or leaving at stations */
+  flowChanges?: FlowChangeSpec[];
+  /** lateral inflow along stretches */
+  lateralInflow?: LateralInflowSpec[];
 }
 
 /** Defaults filled in by validation; named here so README, schema and code agree. */
@@ -145,5 +306,3 @@ export const modelDefaults = {
   method: 'standard-step',
   frictionAveraging: 'conveyance',
 } as const satisfies Partial<Model>;
-  /** the freeboard each station needs above the water surface to its bank (or lining) tops */
-  freeboard?: FreeboardSpec;

@@ -114,6 +114,8 @@ function modelRules(raw: Record<string, unknown>, options: ValidateOptions): Pro
   });
   problems.push(...duplicateIds(reaches, 'reaches', 'reach'));
   problems.push(...duplicateIds(Array.isArray(raw.flows) ? raw.flows : [], 'flows', 'flow'));
+  problems.push(...duplicateIds(Array.isArray(raw.structures) ? raw.structures : [], 'structures', 'structure'));
+  problems.push(...flowRules(raw));
 
   // controls that cannot be: a stage at or below the bed, a depth above a conduit's crown
   const downstreamBed = typeof raw.downstreamBedElevation === 'number' ? raw.downstreamBedElevation : 0;
@@ -146,6 +148,41 @@ function modelRules(raw: Record<string, unknown>, options: ValidateOptions): Pro
       }
     }
   }
+  return problems;
+}
+
+/** Flows against the boundaries (a reservoir finds the discharge), rating curves, per-flow values keyed by flow id. */
+function flowRules(raw: Record<string, unknown>): Problem[] {
+  const problems: Problem[] = [];
+  const boundaries = isRecord(raw.boundaries) ? raw.boundaries : {};
+  const upstream = isRecord(boundaries.upstream) ? boundaries.upstream : undefined;
+  const reservoir = upstream?.type === 'reservoir';
+  const flows = Array.isArray(raw.flows) ? raw.flows : [];
+  const ids: string[] = [];
+  flows.forEach((flow, i) => {
+    if (!isRecord(flow)) return;
+    if (typeof flow.id === 'string') ids.push(flow.id);
+    if (reservoir && flow.discharge !== undefined) problems.push({ where: `flows[${i}].discharge`, message: msg.dischargeWithReservoir(), value: flow.discharge });
+    if (!reservoir && flow.discharge === undefined) problems.push({ where: `flows[${i}].discharge`, message: msg.dischargeRequired() });
+    if (!reservoir && flow.poolElevation !== undefined) problems.push({ where: `flows[${i}].poolElevation`, message: msg.poolWithoutReservoir(), value: flow.poolElevation });
+  });
+  const downstream = isRecord(boundaries.downstream) ? boundaries.downstream : undefined;
+  if (downstream?.type === 'rating' && (downstream.table === undefined) === (downstream.file === undefined)) {
+    problems.push({ where: 'boundaries.downstream', message: msg.ratingNeedsOne() });
+  }
+  const perFlow = (list: unknown, key: string, path: string) => {
+    if (!Array.isArray(list)) return;
+    list.forEach((item, i) => {
+      if (!isRecord(item) || !isRecord(item[key])) return;
+      const values = item[key] as Record<string, unknown>;
+      for (const id of Object.keys(values)) {
+        if (!ids.includes(id)) problems.push({ where: formatPath([path, i, key, id]), message: msg.unknownFlowId(id, ids), value: values[id] });
+      }
+      for (const id of ids) if (!(id in values)) problems.push({ where: `${path}[${i}].${key}`, message: msg.missingFlowValue(id) });
+    });
+  };
+  perFlow(raw.flowChanges, 'addedDischarge', 'flowChanges');
+  perFlow(raw.lateralInflow, 'inflowPerLength', 'lateralInflow');
   return problems;
 }
 

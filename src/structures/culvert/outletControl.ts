@@ -45,6 +45,12 @@ export interface BarrelProfileResult {
   readonly stations?: ReadonlyArray<{ readonly distanceFromOutlet: number; readonly depth: number }>;
   /** distance from the outlet over which the barrel runs full (0: free surface throughout) */
   readonly fullLength?: number;
+  /**
+   * Where the barrel runs full from the inlet down to the point where the free-surface profile reaches the
+   * crown: the pressure head at the inlet above its invert, D + (Sf,full − S)·(full length), from full-flow
+   * friction over the full part. With it the headwater is this head plus (1 + ke)·V²/2g of full flow.
+   */
+  readonly inletPressureHead?: number;
 }
 
 /** The engine's gradually varied flow through the barrel. */
@@ -114,6 +120,22 @@ export function outletControl(inputs: OutletControlInputs): OutletControlResult 
     const profile = inputs.barrelProfile({ barrel: b, length, slope, roughness, discharge, outletControlDepth: controlDepth, tailwaterDepth: tw, criticalDepth: dc, units });
     const outletArea = b.elements(Math.min(profile.outletDepth, D)).area;
     const outletVelocity = discharge / outletArea;
+    if (profile.inletDepth >= D && profile.inletPressureHead !== undefined) {
+      const headwaterDepth = profile.inletPressureHead + (1 + entranceLoss) * full.velocityHead;
+      notes.push(
+        'the computed barrel profile reaches the crown: the barrel runs full from the inlet over that part (full-flow friction), ' +
+          'headwater = inlet pressure head + (1 + ke)·V²/2g of full flow',
+      );
+      return {
+        headwaterDepth,
+        method: 'barrel-profile',
+        outletDepth: profile.outletDepth,
+        outletVelocity,
+        ...(profile.stations ? { stations: profile.stations } : {}),
+        values: { ...values, barrelInletDepth: D, barrelInletPressureHead: profile.inletPressureHead, barrelFullLength: profile.fullLength ?? 0 },
+        notes,
+      };
+    }
     if (profile.inletDepth >= D) {
       notes.push('the computed barrel profile reaches the crown: the inlet end runs full, HDS-5 full-flow equation used');
       return { headwaterDepth: fullFlowHeadwater, method: 'full-flow-ho', outletDepth: profile.outletDepth, outletVelocity, ...(profile.stations ? { stations: profile.stations } : {}), values, notes };

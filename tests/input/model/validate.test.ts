@@ -92,9 +92,9 @@ describe('validateModel(json, file)', () => {
       (m.boundaries.downstream as Record<string, unknown>).depth = 1;
     });
     expect(lines(json)).toEqual([
-      'reaches[0].lenght: unknown key (did you mean "length"?); the keys allowed here are id, section, length, slope',
+      'reaches[0].lenght: unknown key (did you mean "length"?); the keys allowed here are id, section, length, slope, bankHeight',
       'boundaries.downstream.depth: unknown key; the keys allowed here are type, elevation',
-      'colour: unknown key; the keys allowed here are $schema, title, units, sections, reaches, downstreamBedElevation, flows, boundaries, method, frictionAveraging, outputSpacing',
+      'colour: unknown key; the keys allowed here are $schema, title, units, sections, reaches, downstreamBedElevation, flows, boundaries, method, freeboard, frictionAveraging, outputSpacing, description, structures, flowChanges, lateralInflow',
     ]);
   });
 
@@ -108,7 +108,7 @@ describe('validateModel(json, file)', () => {
     expect(lines(json)).toEqual([
       'units: expected one of "SI", "US", got "si" (did you mean "SI"?)',
       'sections.lined.shape: expected one of "rectangular", "trapezoidal", "triangular", "circular", "points", got "trapezoid" (did you mean "trapezoidal"?)',
-      'boundaries.upstream.type: expected one of "depth", "stage", "normal", "critical", got "brink"',
+      'boundaries.upstream.type: expected one of "depth", "stage", "normal", "critical", "reservoir", got "brink"',
       'method: expected one of "standard-step", "direct-step", "ode", got "euler"',
     ]);
   });
@@ -118,7 +118,7 @@ describe('validateModel(json, file)', () => {
       delete (m as Record<string, unknown>).units;
       delete (m.flows[0] as Record<string, unknown>).discharge;
     });
-    expect(lines(json)).toEqual(['units: missing: expected one of "SI", "US"', 'flows[0].discharge: missing: expected a number']);
+    expect(lines(json)).toEqual(['units: missing: expected one of "SI", "US"', 'flows[0].discharge: missing: expected the discharge Q (a number greater than 0); only a reservoir upstream boundary lets gvf find it']);
   });
 
   it('validateModel(json) refuses zero and negative discharges and lengths, and empty lists', () => {
