@@ -48,6 +48,14 @@ export interface Section {
   elements(depth: number): Elements;
   /** the subsections wetted at this depth (one entry for a uniform-roughness shape) */
   subsections(depth: number): SubsectionElements[];
+  /**
+   * Optional allocation-free form of `subsections` for the solvers' inner loops: the same subsections, in the
+   * same order, written into `out` as [area, wettedPerimeter, topWidth, roughness] each; returns how many.
+   * `out` must hold 4 × subsectionLimit numbers.
+   */
+  subsectionsInto?(depth: number, out: Float64Array): number;
+  /** the most subsections `subsectionsInto` can write (present with it) */
+  readonly subsectionLimit?: number;
   /** the defining dimensions, for tables and reports (e.g. { bottomWidth: 3, sideSlopeLeft: 2 }) */
   describe(): Readonly<Record<string, number | string>>;
 }

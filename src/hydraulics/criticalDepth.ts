@@ -27,7 +27,7 @@ import {
   extendSectionError,
   type Extrema,
   requireDischarge,
-  scannedExtrema,
+  weightedExtrema,
   smallestDepth,
   unboundedTop,
 } from './depthSearch.js';
@@ -109,12 +109,7 @@ export function specificEnergyExtrema(hs: HydraulicSection, discharge: number): 
         4,
       );
   const table = depthTable(hs, top, discharge);
-  const values = new Float64Array(table.depth.length);
-  for (let i = 0; i < values.length; i++) {
-    const a = table.area[i]!;
-    values[i] = a > 0 ? table.depth[i]! + (table.alpha[i]! * q2) / (2 * g * a * a) : Infinity;
-  }
-  const extrema = scannedExtrema(section, (y) => energyAt(hs, y, discharge), table.depth, values, what);
+  const extrema = weightedExtrema(section, (y) => energyAt(hs, y, discharge), table.depth, table.depth, table.energyWeight, q2, what);
   if (extrema.minima.length === 0) {
     if (Number.isFinite(section.maxDepth)) throw extendSectionError(section, what);
     throw new HydraulicError(`${what}: specific energy has no minimum below depth ${top}`);

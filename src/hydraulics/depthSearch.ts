@@ -111,15 +111,14 @@ export function scannedExtrema(
   const maxima: number[] = [];
   const n = x.length;
   const negative = (y: number) => -f(y);
+  // the options are made only where a sample is an extremum (the scan itself allocates nothing)
+  const options = (a: number) => ({ xTolerance: depthTolerance(section, a), what });
   for (let i = 1; i < n - 1; i++) {
     const before = v[i - 1]!;
     const here = v[i]!;
     const after = v[i + 1]!;
-    const a = x[i - 1]!;
-    const b = x[i + 1]!;
-    const options = { xTolerance: depthTolerance(section, a), what };
-    if (here < before && here <= after) minima.push(brentMinimum(f, a, b, options));
-    else if (here > before && here >= after) maxima.push(brentMinimum(negative, a, b, options));
+    if (here < before && here <= after) minima.push(brentMinimum(f, x[i - 1]!, x[i + 1]!, options(x[i - 1]!)));
+    else if (here > before && here >= after) maxima.push(brentMinimum(negative, x[i - 1]!, x[i + 1]!, options(x[i - 1]!)));
   }
   return {
     minima,
@@ -127,6 +126,44 @@ export function scannedExtrema(
     tolerance: minimiserTolerance(section),
     top: x[n - 1]!,
     fallingAtTop: n >= 2 && v[n - 1]! < v[n - 2]!,
+  };
+}
+
+/**
+ * scannedExtrema of the sampled curve v[i] = q2·weight[i] + base[i] (specific energy: base = depth,
+ * weight = α/(2gA²); specific force: base = Aȳ, weight = 1/(gA)), computed as the scan goes: the same
+ * comparisons and refinements as scannedExtrema over those values, with nothing stored.
+ */
+export function weightedExtrema(
+  section: Section,
+  f: (y: number) => number,
+  x: ArrayLike<number>,
+  base: ArrayLike<number>,
+  weight: ArrayLike<number>,
+  q2: number,
+  what: string,
+): Extrema {
+  const minima: number[] = [];
+  const maxima: number[] = [];
+  const n = x.length;
+  const negative = (y: number) => -f(y);
+  const options = (a: number) => ({ xTolerance: depthTolerance(section, a), what });
+  let before = n > 0 ? base[0]! + q2 * weight[0]! : NaN;
+  let here = n > 1 ? base[1]! + q2 * weight[1]! : NaN;
+  for (let i = 1; i < n - 1; i++) {
+    const after = base[i + 1]! + q2 * weight[i + 1]!;
+    if (here < before && here <= after) minima.push(brentMinimum(f, x[i - 1]!, x[i + 1]!, options(x[i - 1]!)));
+    else if (here > before && here >= after) maxima.push(brentMinimum(negative, x[i - 1]!, x[i + 1]!, options(x[i - 1]!)));
+    before = here;
+    here = after;
+  }
+  return {
+    minima,
+    maxima,
+    tolerance: minimiserTolerance(section),
+    top: x[n - 1]!,
+    // after the loop `here` is the last value and `before` the one below it
+    fallingAtTop: n >= 2 && here < before,
   };
 }
 

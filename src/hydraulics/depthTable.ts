@@ -18,6 +18,10 @@ export interface DepthTable {
   readonly firstMoment: Float64Array;
   readonly conveyance: Float64Array;
   readonly alpha: Float64Array;
+  /** α/(2gA²) at each depth (Infinity where dry): specific energy is depth + Q²·energyWeight */
+  readonly energyWeight: Float64Array;
+  /** 1/(gA) at each depth (Infinity where dry): specific force is Q²·forceWeight + firstMoment */
+  readonly forceWeight: Float64Array;
 }
 
 const kept = new WeakMap<HydraulicSection['section'], Map<string, DepthTable>>();
@@ -32,7 +36,10 @@ function build(hs: HydraulicSection, top: number, discharge: number | undefined)
     firstMoment: new Float64Array(n),
     conveyance: new Float64Array(n),
     alpha: new Float64Array(n),
+    energyWeight: new Float64Array(n),
+    forceWeight: new Float64Array(n),
   };
+  const g = hs.units.g;
   for (let i = 0; i < n; i++) {
     const y = i === n - 1 ? top : lo + ((top - lo) * i) / scanSamples;
     const e = hs.section.elements(y);
@@ -43,6 +50,9 @@ function build(hs: HydraulicSection, top: number, discharge: number | undefined)
     table.firstMoment[i] = e.firstMoment;
     table.conveyance[i] = k.conveyance;
     table.alpha[i] = k.alpha;
+    // the discharge-free factors of the scans' curves, so a scan for one discharge is one multiply-add per depth
+    table.energyWeight[i] = e.area > 0 ? k.alpha / (2 * g * e.area * e.area) : Infinity;
+    table.forceWeight[i] = e.area > 0 ? 1 / (g * e.area) : Infinity;
   }
   return table;
 }

@@ -47,17 +47,28 @@ export function colebrookWhiteFactor(hydraulicRadius: number, ks: number, reynol
 
 /** Conveyance of one subsection. `velocity` (mean velocity of the flow) matters only for Darcy–Weisbach. */
 export function subsectionConveyance(sub: SubsectionElements, law: FrictionLaw, units: Units, velocity?: number): number {
-  const { area, wettedPerimeter } = sub;
+  return conveyanceOf(sub.area, sub.wettedPerimeter, sub.roughness, law, units, velocity);
+}
+
+/** subsectionConveyance from the subsection's area, wetted perimeter and roughness (no object needed). */
+export function conveyanceOf(
+  area: number,
+  wettedPerimeter: number,
+  roughness: number,
+  law: FrictionLaw,
+  units: Units,
+  velocity?: number,
+): number {
   if (area <= 0 || wettedPerimeter <= 0) return 0;
   const r = area / wettedPerimeter;
   switch (law) {
     case 'manning':
-      return (units.manningFactor / sub.roughness) * area * Math.cbrt(r * r);
+      return (units.manningFactor / roughness) * area * Math.cbrt(r * r);
     case 'chezy':
-      return sub.roughness * area * Math.sqrt(r);
+      return roughness * area * Math.sqrt(r);
     case 'darcy-weisbach': {
       const reynolds = velocity === undefined || velocity <= 0 ? Infinity : (4 * r * velocity) / units.kinematicViscosity;
-      const f = colebrookWhiteFactor(r, sub.roughness, reynolds);
+      const f = colebrookWhiteFactor(r, roughness, reynolds);
       return area * Math.sqrt((8 * units.g * r) / f);
     }
   }

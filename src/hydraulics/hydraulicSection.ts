@@ -5,7 +5,7 @@
  */
 import type { Units } from '../core/units.js';
 import type { Section } from '../geometry/section.js';
-import { type FrictionLaw, subsectionConveyance } from './friction.js';
+import { conveyanceOf, type FrictionLaw, subsectionConveyance } from './friction.js';
 
 export interface HydraulicSection {
   readonly section: Section;
@@ -26,9 +26,17 @@ export interface ConveyanceResult {
   alpha: number;
 }
 
+/** Scratch for sections with subsectionsInto (the solvers' inner loop allocates nothing but the result). */
+let scratch = new Float64Array(4 * 8);
+
 /** Conveyance and α at a depth. `discharge` is used only by Darcy–Weisbach (for the Reynolds number). */
 export function conveyanceAndAlpha(hs: HydraulicSection, depth: number, discharge?: number): ConveyanceResult {
-  const subs = hs.section.subsections(depth);
+  const section = hs.section;
+  if (section.subsectionsInto !== undefined && section.subsectionLimit !== undefined) {
+    if (scratch.length < 4 * section.subsectionLimit) scratch = new Float64Array(4 * section.subsectionLimit);
+    return fromBuffer(hs, scratch, section.subsectionsInto(depth, scratch), discharge);
+  }
+  const subs = section.subsections(depth);
   let totalArea = 0;
   for (const s of subs) totalArea += s.area;
   const velocity = discharge !== undefined && totalArea > 0 ? Math.abs(discharge) / totalArea : undefined;
@@ -42,6 +50,25 @@ export function conveyanceAndAlpha(hs: HydraulicSection, depth: number, discharg
   let alpha = 1;
   if (hs.alpha !== undefined) alpha = hs.alpha;
   else if (subs.length > 1 && k > 0 && totalArea > 0) alpha = sum / ((k * k * k) / (totalArea * totalArea));
+  return { conveyance: k, alpha };
+}
+
+/** conveyanceAndAlpha over subsections written by Section.subsectionsInto: the same sums in the same order. */
+function fromBuffer(hs: HydraulicSection, out: Float64Array, count: number, discharge?: number): ConveyanceResult {
+  let totalArea = 0;
+  for (let i = 0; i < count; i++) totalArea += out[4 * i]!;
+  const velocity = discharge !== undefined && totalArea > 0 ? Math.abs(discharge) / totalArea : undefined;
+  let k = 0;
+  let sum = 0;
+  for (let i = 0; i < count; i++) {
+    const area = out[4 * i]!;
+    const ki = conveyanceOf(area, out[4 * i + 1]!, out[4 * i + 3]!, hs.law, hs.units, velocity);
+    k += ki;
+    if (area > 0) sum += (ki * ki * ki) / (area * area);
+  }
+  let alpha = 1;
+  if (hs.alpha !== undefined) alpha = hs.alpha;
+  else if (count > 1 && k > 0 && totalArea > 0) alpha = sum / ((k * k * k) / (totalArea * totalArea));
   return { conveyance: k, alpha };
 }
 

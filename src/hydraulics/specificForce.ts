@@ -18,7 +18,7 @@ import {
   type Extrema,
   requireDepth,
   requireDischarge,
-  scannedExtrema,
+  weightedExtrema,
   unboundedTop,
 } from './depthSearch.js';
 import { depthTable } from './depthTable.js';
@@ -51,12 +51,7 @@ export function specificForceExtrema(hs: HydraulicSection, discharge: number): E
         4,
       );
   const table = depthTable(hs, top, discharge);
-  const values = new Float64Array(table.depth.length);
-  for (let i = 0; i < values.length; i++) {
-    const a = table.area[i]!;
-    values[i] = a > 0 ? q2 / (g * a) + table.firstMoment[i]! : Infinity;
-  }
-  const extrema = scannedExtrema(section, (y) => forceAt(hs, y, discharge), table.depth, values, what);
+  const extrema = weightedExtrema(section, (y) => forceAt(hs, y, discharge), table.depth, table.firstMoment, table.forceWeight, q2, what);
   if (extrema.minima.length === 0) {
     if (Number.isFinite(section.maxDepth)) throw extendSectionError(section, what);
     throw new HydraulicError(`${what}: specific force has no minimum below depth ${top}`);

@@ -420,6 +420,27 @@ export function points(spec: PointsSpec): PointsSection {
     return out;
   };
 
+  // the same values as `subsections`, written into a caller's buffer (no allocation; see Section.subsectionsInto)
+  const subsectionsInto = (depth: number, out: Float64Array): number => {
+    check(depth);
+    const y = Math.min(depth, maxDepth);
+    const k = intervalOf(y);
+    const u = y - levels[k]!;
+    const list = wetZones[k]!;
+    for (let i = 0; i < list.length; i++) {
+      const zone = list[i]!;
+      const o = (k * groups + 1 + zone) * STRIDE;
+      const t = coef[o + T0]!;
+      const s = coef[o + S]!;
+      const w = 4 * i;
+      out[w] = coef[o + A0]! + u * (t + 0.5 * s * u);
+      out[w + 1] = coef[o + P0]! + coef[o + PS]! * u;
+      out[w + 2] = t + s * u;
+      out[w + 3] = zoneValues[zone]!;
+    }
+    return list.length;
+  };
+
   const copied: StationElevation[] = given.map(([x, z]) => [x, z] as const);
   return {
     shape: 'points',
@@ -429,6 +450,8 @@ export function points(spec: PointsSpec): PointsSection {
     compound: zones.length > 1,
     elements,
     subsections,
+    subsectionsInto,
+    subsectionLimit: zones.length,
     describe: () => ({
       shape: 'points',
       points: copied.length,
