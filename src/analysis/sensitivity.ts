@@ -80,7 +80,8 @@ export interface SensitivityRun {
 }
 
 export interface SensitivityOptions {
-  readonly run?: Omit<RunOptions, 'adjustInput' | 'compare'>;
+  /** options of every run; an `adjustInput` here (a flow batch's stages) is applied before each case's variation */
+  readonly run?: Omit<RunOptions, 'compare'>;
   /** the base run, when the caller has it already (it must come from the same model and options) */
   readonly base?: ModelRun;
   /** after each case (for progress) */
@@ -172,7 +173,8 @@ export function sensitivityAnalysis(model: Model, variations: readonly Variation
     if (c.base) run = options.base ?? runModel(model, { ...options.run });
     else {
       try {
-        run = runModel(model, { ...options.run, adjustInput: (input) => variedInput(input, c) });
+        const first = options.run?.adjustInput;
+        run = runModel(model, { ...options.run, adjustInput: (input, k) => variedInput(first === undefined ? input : first(input, k), c) });
       } catch (error) {
         // a varied case the physics or the model cannot take (a structure overtopped, a control that cannot
         // hold) is reported and left out of the envelope; the base case must compute

@@ -83,9 +83,46 @@ export function buildProgram(streams: Streams, setCode: (code: number) => void):
     .option('--sections <stations>', 'with --out: cross-section charts at these stations (comma-separated)')
     .option('--energy-at <station>', 'with --out: the specific-energy and specific-force diagram at this station')
     .option('--energy-flow <id>', 'with --out: the flow of that diagram (default: the first flow)')
+    .option('--flows <file>', 'CSV of flows (id, discharge[, downstream stage]) replacing the model\'s flows')
+    .option('--sensitivity <list>', 'also run varied cases, e.g. n=±20%,Q=±10%, and report the range of water surface')
     .action(async (model: string, options) => {
       const { runCommand } = await import('./commands/run.js');
       setCode(await runCommand(model, options, streams));
+    });
+
+  program
+    .command('calibrate')
+    .description('fit roughness multipliers to observed high-water marks (bounded least squares)')
+    .argument('<model>', 'model file')
+    .option('--marks <file>', 'CSV of high-water marks: station, elevation, flow id[, weight]')
+    .option('--per-reach', 'one multiplier per reach (default: one for the whole model)')
+    .option('--bounds <lower:upper>', 'bounds of each multiplier (default 0.5:2)')
+    .addOption(new Option('--method <method>', 'integration method (overrides the model)').choices(['standard-step', 'direct-step', 'ode']))
+    .option('--step <dx>', 'output spacing (overrides the model)')
+    .option('--json', 'print the result as JSON')
+    .option('--csv <file>', 'write the mark table (residuals) to a CSV file')
+    .option('--out <dir>', 'write calibration.json, marks.csv and the chart of marks and calibrated profile')
+    .option('--force', 'accept a roughness outside the usual range')
+    .action(async (model: string, options) => {
+      const { calibrateCommand } = await import('./commands/calibrate.js');
+      setCode(await calibrateCommand(model, options, streams));
+    });
+
+  program
+    .command('rating')
+    .description('stage and velocity at chosen stations for a list or range of discharges')
+    .argument('<model>', 'model file')
+    .option('--stations <list>', 'stations, comma-separated (e.g. 120,480)')
+    .option('--discharges <list>', 'discharges: a list 2,5,10 or a range from:to:step such as 1:20:1')
+    .addOption(new Option('--method <method>', 'integration method (overrides the model)').choices(['standard-step', 'direct-step', 'ode']))
+    .option('--step <dx>', 'output spacing (overrides the model)')
+    .option('--json', 'print the result as JSON')
+    .option('--csv <file>', 'write the rating table to a CSV file')
+    .option('--out <dir>', 'write rating.json, rating.csv and the rating-curve chart')
+    .option('--force', 'accept a roughness outside the usual range')
+    .action(async (model: string, options) => {
+      const { ratingCommand } = await import('./commands/rating.js');
+      setCode(await ratingCommand(model, options, streams));
     });
 
   return program;

@@ -12,8 +12,9 @@ import { runModel } from '../../run.js';
 import { type Streams, exitCode } from '../print.js';
 import { type ProgressStream, createProgress } from '../progress.js';
 import { type ReportOptions, printRun } from './report.js';
+import { type RunAnalysisFlags, prepareRunAnalysis, readRunAnalysisFlags } from './runAnalysis.js';
 
-export interface RunOptions extends ReportOptions {
+export interface RunOptions extends ReportOptions, RunAnalysisFlags {
   method?: string;
   step?: string;
   compare?: boolean;
@@ -53,8 +54,13 @@ export async function runCommand(path: string, options: RunOptions, streams: Str
       reader.problems.push({ where: `--${key.replace(/[A-Z]/g, (c) => `-${c.toLowerCase()}`)}`, message: 'draws a chart of the report: use it with --out DIR' });
     }
   }
+  const analysisFlags = readRunAnalysisFlags(options);
+  reader.problems.push(...analysisFlags.problems);
   reader.done();
-  const model = readModelFile(path, { force: options.force === true });
+  const model0 = readModelFile(path, { force: options.force === true });
+  // --flows and --sensitivity (src/analysis): the model's flows replaced by a batch; varied cases after the run
+  const analysis = prepareRunAnalysis(model0, options, analysisFlags.variations);
+  const model = analysis.model;
   const progress = createProgress(progressStream);
   let run;
   try {
@@ -62,6 +68,7 @@ export async function runCommand(path: string, options: RunOptions, streams: Str
       ...(method === undefined ? {} : { method }),
       ...(step === undefined ? {} : { outputSpacing: step }),
       compare: options.compare === true,
+      ...(analysis.adjustInput === undefined ? {} : { adjustInput: analysis.adjustInput }),
       onProgress: (done, total, flow) => progress.update(done, total, `flow ${flow}`),
     });
   } catch (error) {
@@ -71,6 +78,7 @@ export async function runCommand(path: string, options: RunOptions, streams: Str
     throw error;
   }
   progress.finish();
+  run = analysis.finish(run, { ...(method === undefined ? {} : { method }), ...(step === undefined ? {} : { outputSpacing: step }) }, progressStream);
 
   if (options.out !== undefined) {
     checkStations(run.result.flows, sections, energyAt, options.energyFlow);
@@ -90,9 +98,11 @@ export async function runCommand(path: string, options: RunOptions, streams: Str
     printRun(run, options, streams);
     for (const note of written.notes) streams.out(`note: ${note}`);
     streams.out(`report written to ${written.report} (with result.json, stations.csv and ${written.charts.length} chart${written.charts.length === 1 ? '' : 's'} in ${options.out})`);
+    await analysis.print(run, options, streams);
     return exitCode.ok;
   }
   printRun(run, options, streams);
+  await analysis.print(run, options, streams);
   return exitCode.ok;
 }
 

@@ -1,0 +1,100 @@
+/**
+ * What `gvf run` adds from the analysis layer:
+ * - `--flows flows.csv` (id, discharge[, downstream stage]) replaces the model's flows (analysis/batch.ts);
+ * - `--sensitivity n=±20%,Q=±10%` runs the varied cases after the base run (analysis/sensitivity.ts), adds
+ *   `sensitivity` to the result (so `--json` and result.json carry it), prints the envelope table and, with
+ *   `--out DIR`, writes sensitivity.csv and the profile chart with the range drawn as a band.
+ * A progress bar for the cases shows on stderr when it is a terminal.
+ */
+import { flowBatch } from '../../analysis/batch.js';
+import { parseSensitivity } from '../../analysis/options.js';
+import { type Sensitivity, sensitivityAnalysis } from '../../analysis/sensitivity.js';
+import type { Variation } from '../../analysis/variation.js';
+import { InputError, type Problem } from '../../core/errors.js';
+import { unitsOf } from '../../core/units.js';
+import { readFlowTable } from '../../input/csv/flows.js';
+import type { Model } from '../../input/model/types.js';
+import type { ProfileInput } from '../../profile/types.js';
+import type { RunResult } from '../../results/types.js';
+import type { ModelRun, RunOptions } from '../../run.js';
+import type { Streams } from '../print.js';
+import { type ProgressStream, createProgress } from '../progress.js';
+import { chartFiles, sensitivityChart, sensitivityCsv, sensitivityText } from './analysisReport.js';
+import { readFlagFile, writeFiles } from './analysisInput.js';
+
+export interface RunAnalysisFlags {
+  flows?: string;
+  sensitivity?: string;
+}
+
+export interface RunAnalysis {
+  /** the model to run (its flows replaced by a batch) */
+  model: Model;
+  /** for RunOptions.adjustInput (a batch's downstream stages), when there is something to adjust */
+  adjustInput?: (input: ProfileInput, index: number) => ProfileInput;
+  notes: string[];
+  /** after the base run: the sensitivity cases, with `sensitivity` added to the result */
+  finish(run: ModelRun, options: Pick<RunOptions, 'method' | 'outputSpacing'>, progressStream: ProgressStream): ModelRun;
+  /** after the run is printed: the envelope table (text mode) and the band chart (with --out) */
+  print(run: ModelRun, flags: { json?: boolean; out?: string }, streams: Streams): Promise<void>;
+}
+
+/** The sensitivity list, read early so a bad value is reported with the other flags. */
+export function readRunAnalysisFlags(flags: RunAnalysisFlags): { variations?: Variation[]; problems: Problem[] } {
+  if (flags.sensitivity === undefined) return { problems: [] };
+  try {
+    return { variations: parseSensitivity(flags.sensitivity), problems: [] };
+  } catch (error) {
+    if (error instanceof InputError) return { problems: [...error.problems] };
+    throw error;
+  }
+}
+
+type WithSensitivity = RunResult & { sensitivity?: Sensitivity };
+
+export function prepareRunAnalysis(model: Model, flags: RunAnalysisFlags, variations?: readonly Variation[]): RunAnalysis {
+  let runModelOf = model;
+  let adjustInput: RunAnalysis['adjustInput'];
+  const notes: string[] = [];
+  if (flags.flows !== undefined) {
+    const rows = readFlowTable(readFlagFile('--flows', flags.flows), flags.flows, unitsOf(model.units));
+    const batch = flowBatch(model, rows);
+    runModelOf = batch.model;
+    if (rows.some((r) => r.downstreamStage !== undefined)) adjustInput = batch.adjustInput;
+    notes.push(`${rows.length} flow${rows.length === 1 ? '' : 's'} from ${flags.flows} replace the model's flows`, ...batch.notes);
+  }
+  return {
+    model: runModelOf,
+    ...(adjustInput === undefined ? {} : { adjustInput }),
+    notes,
+    finish(run, options, progressStream) {
+      if (variations === undefined || variations.length === 0) return run;
+      const progress = createProgress(progressStream);
+      try {
+        const { sensitivity } = sensitivityAnalysis(runModelOf, variations, {
+          base: run,
+          run: { ...options, ...(adjustInput === undefined ? {} : { adjustInput }) },
+          onCase: (done, total, label) => progress.update(done, total, `case ${label}`),
+        });
+        const result: WithSensitivity = { ...run.result, sensitivity };
+        return { ...run, result };
+      } finally {
+        progress.finish();
+      }
+    },
+    async print(run, printFlags, streams) {
+      const sensitivity = (run.result as WithSensitivity).sensitivity;
+      if (!printFlags.json) for (const note of notes) streams.out(`note: ${note}`);
+      if (sensitivity === undefined) return;
+      if (printFlags.out !== undefined) {
+        await writeFiles(printFlags.out, [
+          { name: 'sensitivity.csv', content: sensitivityCsv(sensitivity, run.result.units) },
+          ...(await chartFiles('sensitivity-profile', await sensitivityChart(sensitivity, run.result))),
+        ]);
+      }
+      if (printFlags.json) return;
+      streams.out(`\n${sensitivityText(sensitivity, run.result.units)}`);
+      if (printFlags.out !== undefined) streams.out(`sensitivity.csv and charts/sensitivity-profile (.vl.json, .svg, .png) written to ${printFlags.out}`);
+    },
+  };
+}
