@@ -266,7 +266,7 @@ function energyPlan(run: ModelRun, options: ReportOptions, notes: string[]): Pla
   const discharge = flow.discharge;
   try {
     const input = energyForceSamples({ hs: found.hs, discharge, depth, flow: flow.id, station: Number(station.toFixed(3)) });
-    input.title = `Specific energy and force: flow ${flow.id}, station ${stationText(station)} ${u}`;
+    input.title = `Specific energy and force at ${stationText(station)} ${u}, flow ${flow.id}`;
     return {
       name: `energy-force-${slug(flow.id)}-at-${stationSlug(station)}`,
       caption: `Specific energy and specific force for flow ${flow.id} (${Number(discharge.toPrecision(6))} ${result.units === 'US' ? 'ft³/s' : 'm³/s'}) at station ${stationText(station)} ${u} (${why}): the flow depth with its alternate depth (equal energy) and sequent depth (equal force), and critical depth.`,

@@ -137,7 +137,7 @@ export function energyForceChart(input: EnergyForceInput): TopLevelSpec {
   const spec = {
     $schema: 'https://vega.github.io/schema/vega-lite/v6.json',
     description: 'gvf specific energy and specific force',
-    title: { text: title, limit: 2 * pw + 60, subtitle: isFiniteNumber(input.discharge) ? `Discharge ${input.discharge} ${input.units === 'US' ? 'ft³/s' : 'm³/s'}` : ' ' },
+    title: { text: title, limit: 2 * pw + 120, subtitle: isFiniteNumber(input.discharge) ? `Discharge ${input.discharge} ${input.units === 'US' ? 'ft³/s' : 'm³/s'}` : ' ' },
     config: chartConfig(),
     autosize: { type: 'pad' },
     spacing: 36,

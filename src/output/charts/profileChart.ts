@@ -126,6 +126,10 @@ function selectFlows(run: RunResult, ids: string[] | undefined): FlowResult[] {
   return out;
 }
 
+/** A jump label's height and width as fractions of the elevation range and the station range (10 px text, 900 px chart). */
+const jumpLabelLine = 0.05;
+const jumpLabelWidth = 0.1;
+
 export function profileChart(run: RunResult, options: ProfileChartOptions = {}): TopLevelSpec {
   const width = options.width ?? size.profile.width;
   const height = options.height ?? size.profile.height;
@@ -283,7 +287,21 @@ export function profileChart(run: RunResult, options: ProfileChartOptions = {}):
   }));
   if (structures.length) key.add(words.structure, palette.structure, dash.solid);
   // Labels of jumps of different flows at one toe are stacked downwards, one line each.
-  const jumpRows = jumps.map((j) => ({ ...j, series: words.jump, labelElevation: r(j.labelElevation - j.flowIndex * 0.05 * (yHigh - yLow)) }));
+  // Jump labels sit just below each toe; a label that would overlap one already placed (near in station and
+  // in height, whichever flow it belongs to) moves down a line until it is clear.
+  const lineHeight = jumpLabelLine * (yHigh - yLow);
+  const labelReach = jumpLabelWidth * (xr[1] - xr[0] || 1);
+  const placed: { station: number; elevation: number }[] = [];
+  const jumpRows = jumps.map((j) => {
+    let elevation = j.labelElevation;
+    for (let tries = 0; tries < jumps.length; tries++) {
+      const clash = placed.some((p) => Math.abs(p.station - j.station) < labelReach && Math.abs(p.elevation - elevation) < lineHeight);
+      if (!clash) break;
+      elevation -= lineHeight;
+    }
+    placed.push({ station: j.station, elevation });
+    return { ...j, series: words.jump, labelElevation: r(elevation) };
+  });
   if (jumps.length) key.add(words.jump, palette.jump, dash.solid);
 
   const x = {
