@@ -109,9 +109,16 @@ export interface FreeboardRow {
   rightBank?: number;
   freeboardLeft?: number;
   freeboardRight?: number;
+  /** the freeboard required here: fixed + velocityHeadFraction × αV²/2g (0 where the model gives no requirement) */
   required: number;
+  /** every known bank's freeboard is at least the required one */
   pass: boolean;
+  /** the water surface lies above a bank (or lining) top */
   overtopped: boolean;
+  /** the energy grade line lies above a bank (or lining) top (a surge or a blocked flow could overtop) */
+  energyOvertopped?: boolean;
+  /** αV²/2g at the station */
+  velocityHead?: number;
 }
 
 export interface StructureResult {
@@ -121,6 +128,8 @@ export interface StructureResult {
   /** the intermediate values an engineer checks by hand, with words */
   values: Record<string, number | string | boolean | null>;
   notes: string[];
+  /** a culvert's computed barrel profile (outlet-control run of the profile engine), distance from the outlet upstream */
+  barrelProfile?: Array<{ distanceFromOutlet: number; depth: number }>;
 }
 
 export interface FlowResult {
