@@ -104,7 +104,7 @@ export async function calibrationChart(c: Calibration): Promise<TopLevelSpec> {
   return profileChart(c.run.result, {
     flows,
     title,
-    observations: { label: 'High-water mark (observed)', points: c.marks.map((m) => ({ station: m.station, elevation: m.observed, flow: m.flow })) },
+    observations: { label: 'High-water mark', points: c.marks.map((m) => ({ station: m.station, elevation: m.observed, flow: m.flow })) },
   });
 }
 
