@@ -57,6 +57,6 @@ describe('energyForceSamples(rectangular)', () => {
       expect(p.depth).toBeLessThanOrEqual(1.2);
       expect(Number.isFinite(p.value)).toBe(true);
     }
-    expect(out.sequentDepth === null || out.sequentDepth <= 1.2).toBe(true);
+    expect(out.sequentDepth == null || out.sequentDepth <= 1.2).toBe(true);
   });
 });
