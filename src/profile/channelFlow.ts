@@ -190,6 +190,20 @@ export function channelEntrance(input: ProfileInput): { station: number; bedElev
   return { station: beds.origin, bedElevation: bedAt(input, beds, beds.origin), section: sectionAt(input, beds, beds.origin, 'downstream') };
 }
 
+/** The downstream end of a channel: its station, bed elevation and section. */
+export function channelEnd(input: ProfileInput): { station: number; bedElevation: number; section: HydraulicSection } {
+  const beds = reachBeds(input);
+  return { station: beds.end, bedElevation: bedAt(input, beds, beds.end), section: sectionAt(input, beds, beds.end, 'upstream') };
+}
+
+/** The discharge leaving the channel: the entering discharge, the flow changes and all lateral inflow. */
+export function outflowDischarge(input: ChannelInput): number {
+  let q = input.discharge;
+  for (const c of input.dischargeChanges ?? []) q += c.added;
+  for (const l of input.lateralInflow ?? []) q += l.inflowPerLength * (l.to - l.from);
+  return q;
+}
+
 /** Split the channel at the stations where its discharge changes. */
 function segmentsOf(input: ChannelInput): Segment[] {
   const beds = reachBeds(input);

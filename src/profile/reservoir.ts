@@ -73,7 +73,12 @@ export function criticalEntranceDischarge(input: ChannelInput, head: number, ke:
  * The profile of a channel drawing from a pool: the discharge found as described above; the flow's own
  * `discharge` is ignored (it is the unknown). Flow changes downstream are added to the found discharge.
  */
-export function computeReservoirProfile(input: ChannelInput, reservoir: ReservoirSpec, options: EngineOptions = {}): { result: FlowResult; solution: ReservoirSolution } {
+export function computeReservoirProfile(
+  input: ChannelInput,
+  reservoir: ReservoirSpec,
+  options: EngineOptions = {},
+  runChannel: (input: ChannelInput) => FlowResult = (trial) => computeChannelProfile(trial, options),
+): { result: FlowResult; solution: ReservoirSolution } {
   const entrance = channelEntrance(input);
   const ke = reservoir.entranceLoss ?? 0;
   if (!(Number.isFinite(ke) && ke >= 0 && ke <= 2)) {
@@ -95,10 +100,11 @@ export function computeReservoirProfile(input: ChannelInput, reservoir: Reservoi
   const { boundaries, ...rest } = input;
   const at = (q: number, upstream: 'critical' | 'none'): FlowResult => {
     runs++;
-    return computeChannelProfile(
-      { ...rest, discharge: q, boundaries: { ...(upstream === 'critical' ? { upstream: { type: 'critical' } } : {}), ...(boundaries.downstream ? { downstream: boundaries.downstream } : {}) } },
-      options,
-    );
+    return runChannel({
+      ...rest,
+      discharge: q,
+      boundaries: { ...(upstream === 'critical' ? { upstream: { type: 'critical' } } : {}), ...(boundaries.downstream ? { downstream: boundaries.downstream } : {}) },
+    });
   };
   const qc = criticalEntranceDischarge(input, head, ke);
   const ycAtQc = criticalDepth(entrance.section, qc);
