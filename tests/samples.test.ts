@@ -102,7 +102,8 @@ describe('samples/*.json (the golden set)', () => {
 
       it(`runModel(samples/${file}) validates and runs, with only allow-listed warnings`, () => {
         const model = readModelFile(join(samplesDir, file));
-        expect(model.title ?? '', 'a sample says it is invented').toMatch(/invented/i);
+        const said = `${model.title ?? ''} ${(model as { description?: string }).description ?? ''}`;
+        expect(said, 'a sample says it is invented (title or description)').toMatch(/invented/i);
         run = runModel(model);
         const allowed = (stored?.allowedWarnings ?? []).map((p) => new RegExp(p));
         const unexpected = run.result.flows.flatMap((f) => f.warnings.filter((w) => !allowed.some((re) => re.test(w))).map((w) => `${f.id}: ${w}`));

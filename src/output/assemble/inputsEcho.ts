@@ -95,7 +95,7 @@ function listItems(list: readonly unknown[], units: UnitSystem, what: string): R
 }
 
 /** Keys echoed in their own groups, or in the method settings, or not at all. */
-const grouped = new Set(['$schema', 'title', 'units', 'sections', 'reaches', 'structures', 'boundaries', 'flows', 'method', 'frictionAveraging', 'outputSpacing', 'downstreamBedElevation']);
+const grouped = new Set(['$schema', 'title', 'description', 'units', 'sections', 'reaches', 'structures', 'boundaries', 'flows', 'method', 'frictionAveraging', 'outputSpacing', 'downstreamBedElevation']);
 
 export function reportInputsOf(model: Model, run: RunResult): ReportInputs {
   const units = model.units;
@@ -118,7 +118,11 @@ export function reportInputsOf(model: Model, run: RunResult): ReportInputs {
     id: 'Channel',
     rows: [{ label: 'Downstream bed elevation', value: model.downstreamBedElevation, unit: unitWords[units].length }],
   };
-  const other: { heading: string; items: ReportItem[] }[] = [{ heading: 'Channel', items: [channel] }];
+  const other: { heading: string; items: ReportItem[] }[] = [];
+  if (typeof loose.description === 'string' && loose.description.trim() !== '') {
+    other.push({ heading: 'About this model', items: [{ id: 'Description', rows: [{ label: 'Text', value: loose.description }] }] });
+  }
+  other.push({ heading: 'Channel', items: [channel] });
   for (const [key, v] of Object.entries(loose)) {
     if (grouped.has(key) || v === undefined) continue;
     const heading = labelOf(key);
