@@ -15,6 +15,7 @@ import { type HydraulicSection, hydraulicSection } from './hydraulics/hydraulicS
 import type { WhereOf } from './input/model/rules.js';
 import { resolveRoughness } from './input/model/rules.js';
 import type { Model, SectionSpec } from './input/model/types.js';
+import { isSurveyReach } from './input/model/survey.js';
 import { formatPath } from './input/model/issues.js';
 import type { ProfileInput, ReachInput } from './profile/types.js';
 
@@ -94,6 +95,12 @@ export interface AssembleOptions {
   readonly outputSpacing?: number;
 }
 
+  /** the engine's form of each surveyed reach, by reach index (src/survey: loadChannelSurvey) */
+  readonly surveyReaches?: ReadonlyMap<number, ReachInput>;
+  /** the model file, for data files named in it (a rating curve's CSV) */
+  readonly modelFile?: string;
+  /** read data files outside the model's folder (--allow-outside) */
+  readonly allowOutside?: boolean;
 /** One engine input per flow of the model. */
 export function assembleProfileInputs(
   model: Model,
@@ -104,6 +111,11 @@ export function assembleProfileInputs(
   const reaches: ReachInput[] = model.reaches.map((reach, i) => {
     const section = sections.get(reach.section);
     if (section === undefined) {
+    if (isSurveyReach(reach)) {
+      const surveyed = options.surveyReaches?.get(i);
+      if (surveyed === undefined) throw new InputError({ where: `reaches[${i}].survey`, message: 'the survey of this reach was not read (the run needs the model file)' });
+      return surveyed;
+    }
       throw new InputError({ where: `reaches[${i}].section`, message: `no section named ${JSON.stringify(reach.section)}`, value: reach.section });
     }
     return { kind: 'prismatic', id: reach.id, section, length: reach.length, slope: reach.slope };

@@ -79,6 +79,8 @@ export function buildProgram(streams: Streams, setCode: (code: number) => void):
     .option('--json', 'print the result as JSON')
     .option('--csv <file>', 'write the station table to a CSV file')
     .option('--force', 'accept a roughness outside the usual range')
+    .option('--allow-outside', "let a model's survey files lie outside the model's folder (only for a model you trust)")
+    .option('--no-interpolate', 'do not insert interpolated sections between surveyed ones (the accuracy goal is then not checked)')
     .option('--out <dir>', 'write report.html, result.json, stations.csv and charts/ into this folder')
     .option('--sections <stations>', 'with --out: cross-section charts at these stations (comma-separated)')
     .option('--energy-at <station>', 'with --out: the specific-energy and specific-force diagram at this station')

@@ -53,6 +53,7 @@ export function toCsv<Row>(columns: readonly CsvColumn<Row>[], rows: readonly Ro
 interface StationRow {
   flow: FlowResult;
   station: FlowResult['stations'][number];
+  freeboard?: NonNullable<FlowResult['freeboard']>[number];
 }
 
 /** The station table of every flow of a run, one row per flow and station. */
@@ -74,6 +75,31 @@ export function stationsCsv(run: RunResult): string {
     { name: 'normal_depth', unit: u.length, value: (r) => r.station.normalDepth, decimals: 4 },
   ];
   const rows: StationRow[] = [];
-  for (const flow of run.flows) for (const station of flow.stations) rows.push({ flow, station });
+  for (const flow of run.flows) {
+    // freeboard rows follow the station table (a station listed twice, at a jump toe, has two rows)
+    const fb = new Map<number, NonNullable<FlowResult['freeboard']>>();
+    for (const f of flow.freeboard ?? []) fb.set(f.station, [...(fb.get(f.station) ?? []), f]);
+    const seen = new Map<number, number>();
+    for (const station of flow.stations) {
+      const k = seen.get(station.station) ?? 0;
+      seen.set(station.station, k + 1);
+      const freeboard = fb.get(station.station)?.[k];
+      rows.push(freeboard === undefined ? { flow, station } : { flow, station, freeboard });
+    }
+  }
+  // bank, freeboard and interpolation columns only where some station has them (prismatic runs keep their table)
+  if (rows.some((r) => r.station.leftBank !== undefined || r.station.rightBank !== undefined || r.freeboard !== undefined)) {
+    columns.push(
+      { name: 'left_bank', unit: u.length, value: (r) => r.station.leftBank, decimals: 4 },
+      { name: 'right_bank', unit: u.length, value: (r) => r.station.rightBank, decimals: 4 },
+      { name: 'freeboard_left', unit: u.length, value: (r) => r.freeboard?.freeboardLeft, decimals: 4 },
+      { name: 'freeboard_right', unit: u.length, value: (r) => r.freeboard?.freeboardRight, decimals: 4 },
+      { name: 'freeboard_required', unit: u.length, value: (r) => r.freeboard?.required, decimals: 4 },
+      { name: 'freeboard_pass', value: (r) => r.freeboard?.pass },
+      { name: 'overtopped', value: (r) => r.freeboard?.overtopped },
+      { name: 'energy_overtopped', value: (r) => r.freeboard?.energyOvertopped },
+    );
+  }
+  if (rows.some((r) => r.station.interpolated === true)) columns.push({ name: 'interpolated', value: (r) => r.station.interpolated === true });
   return toCsv(columns, rows);
 }

@@ -155,6 +155,8 @@ export interface RunResult {
   title?: string;
   units: UnitSystem;
   method: string;
+  /** how station numbers read when the model's survey sets them (absent: distance from the upstream end) */
+  stationing?: { direction: 'increasing-downstream' | 'increasing-upstream'; note: string };
   flows: FlowResult[];
   /** cautions that go with any result that sizes or checks works protecting people or property */
   cautions: string[];

@@ -19,6 +19,10 @@ export interface RunOptions extends ReportOptions, RunAnalysisFlags {
   step?: string;
   compare?: boolean;
   force?: boolean;
+  /** survey files may lie outside the model's folder */
+  allowOutside?: boolean;
+  /** false with --no-interpolate */
+  interpolate?: boolean;
   /** output folder for the report, result.json, stations.csv and charts */
   out?: string;
   /** stations for cross-section charts, comma-separated */
@@ -68,6 +72,10 @@ export async function runCommand(path: string, options: RunOptions, streams: Str
       ...(method === undefined ? {} : { method }),
       ...(step === undefined ? {} : { outputSpacing: step }),
       compare: options.compare === true,
+      modelFile: path,
+      allowOutside: options.allowOutside === true,
+      interpolate: options.interpolate !== false,
+      force: options.force === true,
       ...(analysis.adjustInput === undefined ? {} : { adjustInput: analysis.adjustInput }),
       onProgress: (done, total, flow) => progress.update(done, total, `flow ${flow}`),
     });
