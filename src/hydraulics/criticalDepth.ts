@@ -83,9 +83,9 @@ export function energyAt(hs: HydraulicSection, y: number, discharge: number): nu
 /** The local extrema of specific energy over the section's depth range (minima are the critical depths). */
 export function specificEnergyExtrema(hs: HydraulicSection, discharge: number): Extrema {
   const section = hs.section;
-  const what = `critical depth (Q = ${discharge})`;
+  const label = () => `critical depth (Q = ${discharge})`;
   if (hasSingleCriticalDepth(section)) {
-    const yc = froudeConditionDepth(hs, discharge, constantAlpha(hs), what);
+    const yc = froudeConditionDepth(hs, discharge, constantAlpha(hs), label());
     return {
       minima: [yc],
       maxima: [],
@@ -105,14 +105,14 @@ export function specificEnergyExtrema(hs: HydraulicSection, discharge: number): 
           const e = section.elements(y);
           return g * e.area ** 3 - conveyanceAndAlpha(hs, y, discharge).alpha * q2 * e.topWidth;
         },
-        what,
+        label(),
         4,
       );
   const table = depthTable(hs, top, discharge);
-  const extrema = weightedExtrema(section, (y) => energyAt(hs, y, discharge), table.depth, table.depth, table.energyWeight, q2, what);
+  const extrema = weightedExtrema(section, (y) => energyAt(hs, y, discharge), table.depth, table.depth, table.energyWeight, q2, label);
   if (extrema.minima.length === 0) {
-    if (Number.isFinite(section.maxDepth)) throw extendSectionError(section, what);
-    throw new HydraulicError(`${what}: specific energy has no minimum below depth ${top}`);
+    if (Number.isFinite(section.maxDepth)) throw extendSectionError(section, label());
+    throw new HydraulicError(`${label()}: specific energy has no minimum below depth ${top}`);
   }
   return extrema;
 }

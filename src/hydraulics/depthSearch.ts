@@ -129,6 +129,9 @@ export function scannedExtrema(
   };
 }
 
+/** Stands for the label of a refinement until a message needs it (see weightedExtrema). */
+const pendingLabel = '\u0000pending label';
+
 /**
  * scannedExtrema of the sampled curve v[i] = q2·weight[i] + base[i] (specific energy: base = depth,
  * weight = α/(2gA²); specific force: base = Aȳ, weight = 1/(gA)), computed as the scan goes: the same
@@ -141,21 +144,29 @@ export function weightedExtrema(
   base: ArrayLike<number>,
   weight: ArrayLike<number>,
   q2: number,
-  what: string,
+  what: () => string,
 ): Extrema {
   const minima: number[] = [];
   const maxima: number[] = [];
   const n = x.length;
   const negative = (y: number) => -f(y);
-  const options = (a: number) => ({ xTolerance: depthTolerance(section, a), what });
+  // the label (it formats the discharge, which costs about as much as a refinement) is made only for a message
+  const options = (a: number) => ({ xTolerance: depthTolerance(section, a), what: pendingLabel });
   let before = n > 0 ? base[0]! + q2 * weight[0]! : NaN;
   let here = n > 1 ? base[1]! + q2 * weight[1]! : NaN;
-  for (let i = 1; i < n - 1; i++) {
-    const after = base[i + 1]! + q2 * weight[i + 1]!;
-    if (here < before && here <= after) minima.push(brentMinimum(f, x[i - 1]!, x[i + 1]!, options(x[i - 1]!)));
-    else if (here > before && here >= after) maxima.push(brentMinimum(negative, x[i - 1]!, x[i + 1]!, options(x[i - 1]!)));
-    before = here;
-    here = after;
+  try {
+    for (let i = 1; i < n - 1; i++) {
+      const after = base[i + 1]! + q2 * weight[i + 1]!;
+      if (here < before && here <= after) minima.push(brentMinimum(f, x[i - 1]!, x[i + 1]!, options(x[i - 1]!)));
+      else if (here > before && here >= after) maxima.push(brentMinimum(negative, x[i - 1]!, x[i + 1]!, options(x[i - 1]!)));
+      before = here;
+      here = after;
+    }
+  } catch (error) {
+    if (error instanceof NumericalError && error.message.startsWith(pendingLabel)) {
+      throw new NumericalError(what() + error.message.slice(pendingLabel.length));
+    }
+    throw error;
   }
   return {
     minima,

@@ -51,7 +51,7 @@ export function specificForceExtrema(hs: HydraulicSection, discharge: number): E
         4,
       );
   const table = depthTable(hs, top, discharge);
-  const extrema = weightedExtrema(section, (y) => forceAt(hs, y, discharge), table.depth, table.firstMoment, table.forceWeight, q2, what);
+  const extrema = weightedExtrema(section, (y) => forceAt(hs, y, discharge), table.depth, table.firstMoment, table.forceWeight, q2, () => what);
   if (extrema.minima.length === 0) {
     if (Number.isFinite(section.maxDepth)) throw extendSectionError(section, what);
     throw new HydraulicError(`${what}: specific force has no minimum below depth ${top}`);
