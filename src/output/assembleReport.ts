@@ -207,7 +207,7 @@ function sectionPlan(run: ModelRun, station: number, name: string, why: string, 
     const up = valueAt(flow, at, (s) => s.wsel, 'upstream');
     const down = valueAt(flow, at, (s) => s.wsel, 'downstream');
     if (up !== null && down !== null && Math.abs(up - down) > levelMatch) {
-      waterLevels.push({ flow: `${flow.id} (upstream side)`, wsel: up }, { flow: `${flow.id} (downstream side)`, wsel: down });
+      waterLevels.push({ flow: `${flow.id} upstream`, wsel: up }, { flow: `${flow.id} downstream`, wsel: down });
     } else if (up !== null) waterLevels.push({ flow: flow.id, wsel: up });
     for (const w of [up, down]) if (w !== null) highest = Math.max(highest, w);
     for (const e of entriesAt(flow, at)) for (const b of [e.leftBank, e.rightBank]) if (typeof b === 'number' && Number.isFinite(b)) highest = Math.max(highest, b);

@@ -83,12 +83,15 @@ export function wettedStretches(ground: readonly (readonly [number, number])[], 
 }
 
 /** Water levels for the subtitle, two to a line, so several flows are listed in full rather than cut off. */
-function subtitleLines(parts: readonly string[]): string | string[] {
+function subtitleLines(parts: readonly string[], lead: string): string | string[] {
   if (parts.length === 0) return ' ';
   const lines: string[] = [];
-  for (let i = 0; i < parts.length; i += 2) lines.push(parts.slice(i, i + 2).join('; '));
+  for (let i = 0; i < parts.length; i += 2) lines.push(`${i === 0 ? lead : ''}${parts.slice(i, i + 2).join('; ')}`);
   return lines.length === 1 ? lines[0]! : lines;
 }
+
+/** Key names longer than this (characters) get two columns instead of three. */
+const legendLongName = 28;
 
 export function sectionChart(input: SectionChartInput): TopLevelSpec {
   const width = input.width ?? size.section.width;
@@ -137,7 +140,10 @@ export function sectionChart(input: SectionChartInput): TopLevelSpec {
     label: z.label ?? (isFiniteNumber(z.n) ? `n = ${z.n}` : ''),
   })).filter((z) => z.label !== '');
 
-  const colour = key.colour(words.legendTitle, { orient: 'bottom', columns: 3, direction: 'horizontal' });
+  // three columns of key entries, or two when the names are long (several flows, both sides of a structure)
+  const longest = Math.max(0, ...key.series.map((e) => [...e.name].length));
+  const columns = longest > legendLongName ? 2 : 3;
+  const colour = key.colour(words.legendTitle, { orient: 'bottom', columns, direction: 'horizontal', labelLimit: Math.floor((width - 20) / columns) - 20 });
   const strokeDash = key.strokeDash(words.legendTitle);
   const x = { field: 'offset', type: 'quantitative', title: words.offsetAxis(input.units), scale: { domain: [r(xr[0]), r(xr[1])], nice: false, zero: false } } as const;
   const xPlain = { field: 'offset', type: 'quantitative' } as const;
@@ -205,7 +211,7 @@ export function sectionChart(input: SectionChartInput): TopLevelSpec {
   const spec = {
     $schema: 'https://vega.github.io/schema/vega-lite/v6.json',
     description: 'gvf cross-section',
-    title: { text: title, limit: width - 10, subtitle: subtitleLines(levels.map((w) => `${w.flow}: water surface ${w.wsel.toFixed(3)} ${u}`)) },
+    title: { text: title, limit: width - 10, subtitle: subtitleLines(levels.map((w) => `${w.flow} ${w.wsel.toFixed(3)} ${u}`), 'Water surface: ') },
     width,
     height,
     autosize: { type: 'fit', contains: 'padding' },
