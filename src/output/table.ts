@@ -2,6 +2,7 @@
  * Text tables for the terminal: aligned columns, the unit in each header, fixed decimals per column.
  * A value that does not exist (null, undefined, or a non-finite number) prints as "—", never as NaN.
  */
+import { structureLines } from './structures.js';
 import { unitsOf } from '../core/units.js';
 import type { FlowResult, JumpResult, ReachResult, RunResult, StationResult } from '../results/types.js';
 import type { MethodComparison } from '../run.js';
@@ -196,6 +197,7 @@ export function runReport(run: RunResult, comparison?: MethodComparison): string
         flow.reaches,
       ),
     );
+    parts.push(...structureLines(flow, run.units));
     if (flow.jumps.length > 0) {
       parts.push('', 'hydraulic jumps:');
       parts.push(

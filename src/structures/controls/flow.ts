@@ -49,7 +49,7 @@ function describeRating(result: FlowResult, input: StructuredFlowInput): FlowRes
     ...result,
     controls: (result.controls ?? []).map((c) =>
       c.kind === 'downstream boundary'
-        ? { ...c, kind: 'rating curve', reason: `${c.reason}: stage ${show(stage)} interpolated in the rating curve (${pts.length} points, discharges ${show(pts[0]!.discharge)} to ${show(pts[pts.length - 1]!.discharge)}) at the outflow ${show(q)}` }
+        ? { ...c, kind: 'rating curve', reason: `stage ${show(stage)} interpolated in the rating curve (${pts.length} points, discharges ${show(pts[0]!.discharge)} to ${show(pts[pts.length - 1]!.discharge)}) at the outflow ${show(q)}` }
         : c,
     ),
   };
@@ -66,12 +66,36 @@ export function computeStructuredFlow(input: StructuredFlowInput, units: Units, 
   } else {
     result = computeChannelProfile(withRating(base), options);
   }
-  result = describeRating(result, base);
+  return finishStructures(result, base, units);
+}
+
+/** True when a flow needs more than the engine alone: a reservoir, a rating curve, flow changes, lateral inflow, an end overfall. */
+export function needsStructuredRun(input: StructuredFlowInput): boolean {
+  return (
+    input.reservoir !== undefined ||
+    input.rating !== undefined ||
+    input.endOverfall !== undefined ||
+    (input.dischargeChanges?.length ?? 0) > 0 ||
+    (input.lateralInflow?.length ?? 0) > 0 ||
+    (input.controls?.length ?? 0) > 0
+  );
+}
+
+/** The input with a rating curve's stage (for its outflow) as the downstream boundary; others unchanged. */
+export function withRatingStage(input: StructuredFlowInput): StructuredFlowInput {
+  if (!input.rating) return input;
+  const stage = stageFromRating(input.rating, outflowDischarge(input));
+  return { ...input, boundaries: { ...input.boundaries, downstream: { type: 'stage', elevation: stage } } };
+}
+
+/** After the run: the rating curve named, the free overfall at the end reported, the jump below each structure placed. */
+export function finishStructures(computed: FlowResult, input: StructuredFlowInput, units: Units): FlowResult {
+  const result = describeRating(computed, input);
   const structures = [...(result.structures ?? [])];
-  if (base.endOverfall) {
-    const end = channelEnd(base);
-    const q = result.stations[result.stations.length - 1]?.discharge ?? outflowDischarge({ ...base, discharge: result.discharge });
-    structures.push(endOverfallResult(base.endOverfall, end.section, end.bedElevation, q, units));
+  if (input.endOverfall) {
+    const end = channelEnd(input);
+    const q = result.stations[result.stations.length - 1]?.discharge ?? outflowDischarge({ ...input, discharge: result.discharge });
+    structures.push(endOverfallResult(input.endOverfall, end.section, end.bedElevation, q, units));
   }
   const placed = withJumpPositions({ ...result, structures }, input.apronLengths ?? new Map());
   return placed.length > 0 ? { ...result, structures: placed } : result;
