@@ -698,7 +698,8 @@ export function computeProfile(input: ProfileInput, options: EngineOptions = {})
       const own = beyond.filter((e) => e.piece === pieceIndex);
       stop.resolved = own.every((e) => !e.filled && e.depth < criticalAt(pieces[e.piece]!, e.station) * (1 + 1e-9));
     }
-    (stop.resolved ? notes : warnings).push(stop.message);
+    if (!stop.resolved) warnings.push(stop.message);
+    else notes.push(resolvedStopNote(stop, jumps));
   }
 
   /* 5. assemble */
@@ -781,4 +782,14 @@ function stationResult(piece: Piece, e: Entry, discharge: number): StationResult
     normalDepth: piece.nodes ? null : piece.cls.normalDepth,
     ...(piece.nodes && piece.nodes[piece.stations.indexOf(e.station)]?.interpolated ? { interpolated: true } : {}),
   };
+}
+
+/** A stop that another profile covers, told as what happened rather than as what is missing. */
+function resolvedStopNote(stop: ProfileStop, jumps: readonly JumpResult[]): string {
+  if (stop.direction !== 'upstream' || stop.reason !== 'critical') return stop.message;
+  const jump = jumps.find((j) => j.station >= stop.station);
+  const joined = jump
+    ? `the supercritical profile from upstream carries the flow there and a hydraulic jump at station ${show(jump.station)} joins it to the subcritical one.`
+    : 'the supercritical profile from upstream carries the flow there.';
+  return `The subcritical profile computed upstream reaches critical depth at station ${show(stop.station)}; ${joined}`;
 }
