@@ -5,7 +5,7 @@
  */
 import { InputError, type Problem } from '../../core/errors.js';
 import { type UnitSystem, isUnitSystem } from '../../core/units.js';
-import { slopeLimit } from './limits.js';
+import { largestMagnitude, maxOutputStations, slopeLimit } from './limits.js';
 import * as msg from './messages.js';
 import { sectionProblems } from './rules.js';
 import type { BoundarySpec, FrictionName, Model, SectionShapeName, SectionSpec } from './types.js';
@@ -83,6 +83,10 @@ export class FlagReader {
     }
     if (!Number.isFinite(value)) {
       this.problems.push({ where: flag, message: msg.notFinite(text), value: text });
+      return undefined;
+    }
+    if (Math.abs(value) > largestMagnitude) {
+      this.problems.push({ where: flag, message: msg.tooLarge(value), value });
       return undefined;
     }
     if (rule === 'positive' && !(value > 0)) {
@@ -228,6 +232,9 @@ export function modelFromProfileFlags(flags: ProfileFlags): Model {
     Object.keys(FrictionAveragingName) as FrictionAveragingName[],
   );
   const step = reader.number('--step', flags.step, 'positive', false);
+  if (length !== undefined && step !== undefined && length / step > maxOutputStations) {
+    reader.problems.push({ where: '--step', message: msg.tooManyStations(step, length, units === 'US' ? 'ft' : 'm', '--step'), value: step });
+  }
   if (section?.shape === 'circular') {
     for (const [flag, b] of [['--upstream', upstream], ['--downstream', downstream]] as const) {
       if (b?.type === 'depth' && b.depth > section.diameter) {

@@ -14,3 +14,12 @@ export const slopeLimit = 1;
 
 /** An irregular section needs at least this many points to enclose an area. */
 export const minimumPoints = 3;
+
+/**
+ * A number of larger magnitude in a model file or a flag is a typing or unit mistake, not a channel: 10⁷ m is
+ * 10,000 km (10⁷ m³/s some fifty times the largest river's flood). The CSV readers use the same bound.
+ */
+export const largestMagnitude = 1e7;
+
+/** At most this many output stations per flow (10 km every 0.1 m): a bound on memory and time, not physics. */
+export const maxOutputStations = 100_000;

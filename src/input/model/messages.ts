@@ -3,7 +3,7 @@
  * per message, so wording is reviewed in one place and tests pin it exactly. A message says what was found
  * and what is accepted; the place (JSON path or flag) is the Problem's `where`.
  */
-import { manningRange, alphaRange, slopeLimit, minimumPoints } from './limits.js';
+import { manningRange, alphaRange, slopeLimit, minimumPoints, largestMagnitude, maxOutputStations } from './limits.js';
 
 /** A value as a user would recognise it in their file. */
 export function describeValue(value: unknown): string {
@@ -87,6 +87,13 @@ export const pair = (first: string, second: string): string => `a pair [${first}
 
 export const notFinite = (got: unknown): string => expected('a finite number', got);
 
+export const tooLarge = (got: unknown): string =>
+  expected(`a number of magnitude at most ${largestMagnitude} (a larger one is a typing or unit mistake)`, got);
+
+export const tooManyStations = (spacing: number, length: number, unit: string, flag: string): string =>
+  `the output spacing ${spacing} ${unit} gives ${Math.ceil(length / spacing)} stations along the ${round(length)} ${unit} channel; ` +
+  `at most ${maxOutputStations} are computed: use ${flag} ≥ ${Number((length / maxOutputStations).toPrecision(3))}`;
+
 export const notJsonObject = (got: unknown): string =>
   `${expected('a JSON object holding the model (see schema/gvf-model.schema.json)', got)}`;
 
@@ -100,6 +107,9 @@ export const fileEmpty = (): string =>
   'the file is empty; expected a JSON object holding the model (see schema/gvf-model.schema.json)';
 
 export const jsonSyntax = (problem: string): string => `not valid JSON: ${problem}`;
+
+export const notUtf8 = (): string =>
+  'the file is not UTF-8 text (it holds NUL bytes: saved as UTF-16, or not a text file); save it as UTF-8';
 
 // ---- sections ----------------------------------------------------------------------------------------
 

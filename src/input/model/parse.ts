@@ -1,6 +1,6 @@
 /**
- * Reading a model file: text → JSON → validated Model. A byte-order mark is dropped; an empty file, a syntax
- * error (with line:column) or a missing file is an InputError naming the file.
+ * Reading a model file: text → JSON → validated Model. A byte-order mark is dropped; an empty file, a file that
+ * is not UTF-8 (UTF-16), a syntax error (with line:column) or a missing file is an InputError naming the file.
  */
 import { readFileSync } from 'node:fs';
 import { InputError } from '../../core/errors.js';
@@ -13,6 +13,8 @@ import { ModelFileError, type ValidateOptions, validateModel } from './validate.
 export function parseModelText(text: string, fileLabel: string, options: ValidateOptions = {}): Model {
   const body = text.charCodeAt(0) === 0xfeff ? text.slice(1) : text;
   if (body.trim() === '') throw new ModelFileError(fileLabel, [{ where: fileLabel, message: msg.fileEmpty() }]);
+  // JSON text holds no NUL; a UTF-16 file read as UTF-8 is full of them (every ASCII character has a zero byte)
+  if (body.includes('\u0000')) throw new ModelFileError(fileLabel, [{ where: fileLabel, message: msg.notUtf8() }]);
   let json: unknown;
   try {
     json = JSON.parse(body);

@@ -6,7 +6,7 @@
  * The second pass also runs on the parts that passed the first, so one run reports as much as it can.
  */
 import { InputError, type Problem } from '../../core/errors.js';
-import { slopeLimit } from './limits.js';
+import { largestMagnitude, maxOutputStations, slopeLimit } from './limits.js';
 import * as msg from './messages.js';
 import { formatPath, issueMessage, issuesToProblems } from './issues.js';
 import { sectionProblems } from './rules.js';
@@ -36,6 +36,7 @@ export function validateModel(json: unknown, fileLabel: string, options: Validat
   const parsed = modelSchema.safeParse(json, parseOptions);
   const problems: Problem[] = parsed.success ? [] : issuesToProblems(parsed.error.issues, modelSchema, json);
   problems.push(...modelRules(json as Record<string, unknown>, options));
+  problems.push(...tooLargeNumbers(json, new Set(problems.map((p) => p.where))));
   if (problems.length > 0 || !parsed.success) throw new ModelFileError(fileLabel, inDocumentOrder(dedupe(problems), json));
   return parsed.data;
 }
@@ -85,7 +86,9 @@ function modelRules(raw: Record<string, unknown>, options: ValidateOptions): Pro
   const sectionNames = isRecord(raw.sections) ? Object.keys(raw.sections) : [];
 
   if (isRecord(raw.sections)) {
-    if (sectionNames.length === 0) problems.push({ where: 'sections', message: msg.listTooShort(1, 'section', []) });
+    // a model of surveyed reaches only may leave "sections" empty (its sections come from the survey files)
+    const prismatic = !Array.isArray(raw.reaches) || raw.reaches.some((r) => !isRecord(r) || r.survey === undefined);
+    if (sectionNames.length === 0 && prismatic) problems.push({ where: 'sections', message: msg.listTooShort(1, 'section', []) });
     for (const name of sectionNames) {
       const parsed = sectionSchema.safeParse(raw.sections[name], parseOptions);
       if (!parsed.success) continue;
@@ -113,13 +116,21 @@ function modelRules(raw: Record<string, unknown>, options: ValidateOptions): Pro
     else lengthsKnown = false;
   });
   problems.push(...duplicateIds(reaches, 'reaches', 'reach'));
+  const spacing = raw.outputSpacing;
+  const prismatic = reaches.every((r) => isRecord(r) && typeof r.length === 'number' && r.length > 0);
+  const total = prismatic ? reaches.reduce((sum: number, r) => sum + (r as { length: number }).length, 0) : 0;
+  if (typeof spacing === 'number' && spacing > 0 && total > 0 && total / spacing > maxOutputStations) {
+    problems.push({ where: 'outputSpacing', message: msg.tooManyStations(spacing, total, raw.units === 'US' ? 'ft' : 'm', 'outputSpacing'), value: spacing });
+  }
   problems.push(...duplicateIds(Array.isArray(raw.flows) ? raw.flows : [], 'flows', 'flow'));
   problems.push(...duplicateIds(Array.isArray(raw.structures) ? raw.structures : [], 'structures', 'structure'));
   problems.push(...flowRules(raw));
 
   // controls that cannot be: a stage at or below the bed, a depth above a conduit's crown
   const downstreamBed = typeof raw.downstreamBedElevation === 'number' ? raw.downstreamBedElevation : 0;
-  if (isRecord(raw.boundaries) && lengthsKnown && reaches.length > 0) {
+  // (beds from implausibly large numbers are left to the bound on numbers, which names the number itself)
+  const plausible = Math.abs(downstreamBed) <= largestMagnitude && Math.abs(fall) <= largestMagnitude;
+  if (isRecord(raw.boundaries) && lengthsKnown && plausible && reaches.length > 0) {
     const ends = [
       { end: 'upstream', bed: downstreamBed + fall, reach: reaches[0] },
       { end: 'downstream', bed: downstreamBed, reach: reaches[reaches.length - 1] },
@@ -183,6 +194,25 @@ function flowRules(raw: Record<string, unknown>): Problem[] {
   };
   perFlow(raw.flowChanges, 'addedDischarge', 'flowChanges');
   perFlow(raw.lateralInflow, 'inflowPerLength', 'lateralInflow');
+  return problems;
+}
+
+/** Every number beyond the plausibility bound, at its path (places with a problem already are left alone). */
+function tooLargeNumbers(json: unknown, placed: ReadonlySet<string>): Problem[] {
+  const problems: Problem[] = [];
+  // an explicit stack: a deeply nested file must not overflow the call stack
+  const stack: Array<{ value: unknown; path: PropertyKey[] }> = [{ value: json, path: [] }];
+  while (stack.length > 0) {
+    const { value, path } = stack.pop()!;
+    if (typeof value === 'number' && Math.abs(value) > largestMagnitude) {
+      const where = formatPath(path);
+      if (!placed.has(where)) problems.push({ where, message: msg.tooLarge(value), value });
+    } else if (Array.isArray(value)) {
+      value.forEach((v, i) => stack.push({ value: v, path: [...path, i] }));
+    } else if (isRecord(value)) {
+      for (const [k, v] of Object.entries(value)) stack.push({ value: v, path: [...path, k] });
+    }
+  }
   return problems;
 }
 
