@@ -24,7 +24,7 @@ import { computeProfile } from '../profile/engine.js';
 import type { ProfileInput, ReachInput, SurveyNode } from '../profile/types.js';
 import type { FlowResult } from '../results/types.js';
 import type { SurveySite } from './sites.js';
-import { halvingAcceptFraction, halvingRounds, largestSubdivision, refineShare } from './tolerances.js';
+import { halvingAcceptFraction, halvingRounds, largestSubdivision, refineFloor, refineShare } from './tolerances.js';
 
 /** The surveyed reaches of one flow's input: reach index → its surveyed sites, upstream first. */
 export type SurveyedParts = ReadonlyMap<number, readonly SurveySite[]>;
@@ -206,7 +206,8 @@ export function refineSurvey(input: ProfileInput, parts: SurveyedParts, interpol
         for (let j = 0; j < d[i]!; j++) {
           const p = diff.get(lerp(a, b, j / d[i]!));
           const q = diff.get(lerp(a, b, (j + 1) / d[i]!));
-          if (p && q) share = Math.max(share, Math.abs(p.e - q.e) / Math.min(p.goal, q.goal));
+          // a station left out of the comparison at an end of the stretch (a control at critical depth) counts as exact
+          if (p || q) share = Math.max(share, Math.abs((p?.e ?? 0) - (q?.e ?? 0)) / Math.min(p?.goal ?? Infinity, q?.goal ?? Infinity));
         }
         shares.push({ k, i, share });
       }
@@ -215,7 +216,7 @@ export function refineSurvey(input: ProfileInput, parts: SurveyedParts, interpol
     let refined = false;
     for (const s of shares) {
       const d = divisions.get(s.k)!;
-      if (s.share > 0 && s.share >= refineShare * top && d[s.i]! < largestSubdivision) {
+      if (s.share >= refineFloor && s.share >= refineShare * top && d[s.i]! < largestSubdivision) {
         d[s.i] = d[s.i]! * 2;
         refined = true;
       }

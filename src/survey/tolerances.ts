@@ -20,3 +20,5 @@ export const halvingRounds = 7;
 export const largestSubdivision = 128;
 /** Intervals whose share of the change is at least this fraction of the largest share are refined in a round. */
 export const refineShare = 0.1;
+/** ...and at least this fraction of the accuracy goal (smaller shares cannot matter). */
+export const refineFloor = 0.1;
