@@ -18,6 +18,8 @@ import type { Model, SectionSpec } from './input/model/types.js';
 import { isSurveyReach } from './input/model/survey.js';
 import { formatPath } from './input/model/issues.js';
 import type { ProfileInput, ReachInput } from './profile/types.js';
+import { assembleExtras, structuredFlowInput } from './assembleStructures.js';
+import type { StructuredFlowInput } from './structures/controls/flow.js';
 
 /** The geometry layer's spec for a section: the roughness key (n, chezy or ks) becomes `roughness`. */
 export function geometrySpecOf(spec: SectionSpec): GeometrySpec {
@@ -93,46 +95,45 @@ export interface AssembleOptions {
   readonly method?: ProfileInput['method'];
   /** overrides the model's output spacing */
   readonly outputSpacing?: number;
-}
-
   /** the engine's form of each surveyed reach, by reach index (src/survey: loadChannelSurvey) */
   readonly surveyReaches?: ReadonlyMap<number, ReachInput>;
   /** the model file, for data files named in it (a rating curve's CSV) */
   readonly modelFile?: string;
   /** read data files outside the model's folder (--allow-outside) */
   readonly allowOutside?: boolean;
-/** One engine input per flow of the model. */
+}
+
+/** One engine input per flow of the model (with its structures, special ends and flow changes: assembleStructures.ts). */
 export function assembleProfileInputs(
   model: Model,
   sections: ReadonlyMap<string, HydraulicSection>,
   options: AssembleOptions = {},
-): ProfileInput[] {
+): StructuredFlowInput[] {
   const units = unitsOf(model.units);
   const reaches: ReachInput[] = model.reaches.map((reach, i) => {
-    const section = sections.get(reach.section);
-    if (section === undefined) {
     if (isSurveyReach(reach)) {
       const surveyed = options.surveyReaches?.get(i);
       if (surveyed === undefined) throw new InputError({ where: `reaches[${i}].survey`, message: 'the survey of this reach was not read (the run needs the model file)' });
       return surveyed;
     }
+    const section = sections.get(reach.section);
+    if (section === undefined) {
       throw new InputError({ where: `reaches[${i}].section`, message: `no section named ${JSON.stringify(reach.section)}`, value: reach.section });
     }
     return { kind: 'prismatic', id: reach.id, section, length: reach.length, slope: reach.slope };
   });
   const outputSpacing = options.outputSpacing ?? model.outputSpacing;
-  return model.flows.map((flow) => ({
+  const extras = assembleExtras(model, reaches, units, options);
+  return model.flows.map((flow) => structuredFlowInput(model, flow, {
     units,
     reaches,
-    discharge: flow.discharge,
+    discharge: flow.discharge ?? 1,
     flowId: flow.id,
-    boundaries: {
-      ...(model.boundaries.upstream === undefined ? {} : { upstream: model.boundaries.upstream }),
-      ...(model.boundaries.downstream === undefined ? {} : { downstream: model.boundaries.downstream }),
-    },
+    // the ends as the engine takes them (a rating curve and a reservoir are set by structuredFlowInput)
+    boundaries: {},
     method: options.method ?? model.method,
     frictionAveraging: model.frictionAveraging,
     ...(outputSpacing === undefined ? {} : { outputSpacing }),
     downstreamBedElevation: model.downstreamBedElevation,
-  }));
+  }, extras));
 }

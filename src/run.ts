@@ -6,7 +6,9 @@
  *
  * 1. assembleSections: each named section built through the geometry registry (problems keep their JSON path).
  * 2. assembleProfileInputs: reaches joined upstream to downstream, controls and method per flow.
- * 3. the profile engine computes each flow.
+ * 3. the profile engine computes each flow; surveyed reaches (src/survey) are read from their files first, given
+ *    interpolated sections where the accuracy goal needs them, and every flow gets bank elevations, freeboard
+ *    and the user's stationing.
  * 4. results gathered with the model's title, units, method and the cautions.
  * 5. with `compare`, all three methods run against a tight-tolerance ODE reference (profile/compare.ts) and the
  *    largest depth difference of each is reported against the accuracy goal.
@@ -16,7 +18,10 @@
 import { assembleProfileInputs, assembleSections } from './assemble.js';
 import type { HydraulicSection } from './hydraulics/hydraulicSection.js';
 import type { Model } from './input/model/types.js';
-import { computeProfile } from './profile/engine.js';
+import { type ChannelSurvey, computeChannelFlow, loadChannelSurvey } from './survey/channel.js';
+import { stationingNote } from './survey/stationing.js';
+import { computeModelFlow } from './runStructures.js';
+import { structureCaution } from './structures/cautions.js';
 import { compareMethods } from './profile/compare.js';
 import type { ProfileInput, ProfileMethod } from './profile/types.js';
 import type { RunResult } from './results/types.js';
@@ -36,12 +41,22 @@ export interface RunOptions {
   readonly adjustInput?: (input: ProfileInput, index: number) => ProfileInput;
   /** called after each flow is computed (the CLI's progress bar) */
   readonly onProgress?: (done: number, total: number, flowId: string) => void;
+  /** the model file: surveyed reaches read their files relative to it */
+  readonly modelFile?: string;
+  /** let surveyed reaches read files outside the model's folder (the CLI's --allow-outside) */
+  readonly allowOutside?: boolean;
+  /** insert interpolated sections between surveyed ones where the accuracy goal needs them (default true) */
+  readonly interpolate?: boolean;
+  /** accept unusual roughness in survey files (the CLI's --force) */
+  readonly force?: boolean;
 }
 
 export interface RunStages {
   readonly model: Model;
   readonly sections: ReadonlyMap<string, HydraulicSection>;
   readonly inputs: readonly ProfileInput[];
+  /** the surveyed reaches, read from their files (absent when the model has none) */
+  readonly survey?: ChannelSurvey;
 }
 
 /** One method against the tight-tolerance ODE reference, for one flow. */
@@ -80,24 +95,29 @@ export interface ModelRun {
 
 export function runModel(model: Model, options: RunOptions = {}): ModelRun {
   const sections = assembleSections(model);
-  const assembled = assembleProfileInputs(model, sections, options);
+  const survey = loadChannelSurvey(model, sections, options);
+  const assembled = assembleProfileInputs(model, sections, survey === undefined ? options : { ...options, surveyReaches: survey.reaches });
   const adjust = options.adjustInput;
   const inputs = adjust === undefined ? assembled : assembled.map((input, i) => adjust(input, i));
   const method = options.method ?? model.method;
-  const flows = inputs.map((input, i) => {
-    const flow = computeProfile(input);
+  // each flow through the channel: interpolation on surveyed reaches, banks and freeboard, the user's stations
+  const computed = inputs.map((input, i) => {
+    const flow = computeModelFlow(model, input, survey !== undefined, (prepared) => computeChannelFlow(model, prepared, survey, options));
     options.onProgress?.(i + 1, inputs.length, input.flowId);
     return flow;
   });
+  const flows = computed.map((c) => c.result);
   const result: RunResult = {
     ...(model.title === undefined ? {} : { title: model.title }),
     units: model.units,
     method,
     flows,
-    cautions: [screeningCaution],
+    cautions: (model.structures ?? []).length > 0 ? [screeningCaution, structureCaution] : [screeningCaution],
   };
-  const run: ModelRun = { result, stages: { model, sections, inputs } };
-  if (options.compare) run.comparison = compareAll(inputs);
+  if (survey !== undefined) result.stationing = { direction: survey.stations.direction, note: stationingNote(survey.stations) };
+  const computedInputs = computed.map((c) => c.input);
+  const run: ModelRun = { result, stages: { model, sections, inputs: computedInputs, ...(survey === undefined ? {} : { survey }) } };
+  if (options.compare) run.comparison = compareAll(computedInputs);
   return run;
 }
 
