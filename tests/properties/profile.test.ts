@@ -101,7 +101,8 @@ function problemsOf(c: ChannelCase, result: FlowResult): string[] {
     if (Math.abs(jump.downstreamDepth - yc) <= 1e-9 * yc || c.input.method === 'ode') continue;
     const m1 = specificForce(hs, jump.upstreamDepth, c.input.discharge);
     const m2 = specificForce(hs, jump.downstreamDepth, c.input.discharge);
-    if (Math.abs(m1 - m2) > 1e-6 * Math.max(m1, m2)) {
+    // the toe is located to 1e-9 of the channel length, where M changes fast (a steep S2/H3 near its start): 1e-5 relative
+    if (Math.abs(m1 - m2) > 1e-5 * Math.max(m1, m2)) {
       problems.push(`jump at ${jump.station}: specific force ${m1} (y1 ${jump.upstreamDepth}) ≠ ${m2} (y2 ${jump.downstreamDepth})`);
     }
     if (!(jump.upstreamDepth < jump.downstreamDepth)) problems.push(`jump at ${jump.station}: y1 ${jump.upstreamDepth} is not below y2 ${jump.downstreamDepth}`);

@@ -7,7 +7,8 @@
  *
  *   npx vitest run tests/properties                   the CI size: a fixed seed, a few thousand cases
  *   npm run test:properties:long                      ten times as many cases, a fresh seed (printed)
- *   GVF_SEED=123 GVF_RUNS=5000 npm run test:properties:long   replay or resize a run
+ *   GVF_SEED=123 GVF_RUNS=5 npm run test:properties:long   replay or resize a run (GVF_RUNS: a factor on the CI runs)
+ * In a long run without GVF_SEED each test file draws its own seed and prints it; a failure also shows it.
  */
 import fc from 'fast-check';
 import { SI, US, type Units } from '../../src/core/units.js';
