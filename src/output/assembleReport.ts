@@ -124,6 +124,12 @@ function valueAt(flow: FlowResult, station: number, pick: (s: StationResult) => 
   return null;
 }
 
+/** The discharge at a station: the station's own where the flow changes along the channel, else the flow's. */
+function localDischarge(flow: FlowResult, station: number): number {
+  const q = valueAt(flow, station, (s) => s.discharge ?? flow.discharge, 'upstream');
+  return q !== null && q > 0 ? q : flow.discharge;
+}
+
 function stationRange(run: RunResult): [number, number] | null {
   const all = run.flows.flatMap((f) => f.stations.map((s) => s.station)).filter(Number.isFinite);
   return all.length ? [Math.min(...all), Math.max(...all)] : null;
@@ -263,7 +269,8 @@ function energyPlan(run: ModelRun, options: ReportOptions, notes: string[]): Pla
     notes.push(`no energy–force diagram drawn at station ${stationText(station)} ${u}: it is outside the computed profile of flow ${flow.id}`);
     return null;
   }
-  const discharge = flow.discharge;
+  // the discharge at the station itself where it changes along the channel (flow changes, lateral inflow)
+  const discharge = localDischarge(flow, station);
   try {
     const input = energyForceSamples({ hs: found.hs, discharge, depth, flow: flow.id, station: Number(station.toFixed(3)) });
     input.title = `Specific energy and force at ${stationText(station)} ${u}, flow ${flow.id}`;
@@ -286,7 +293,7 @@ function ratingPlan(run: ModelRun, stations: readonly { station: number; label: 
   const series: RatingSeries[] = stations.slice(0, ratingSeriesLimit).map(({ station, label }) => ({
     label,
     points: result.flows
-      .map((f) => ({ discharge: f.discharge, stage: valueAt(f, station, (s) => s.wsel, 'upstream'), flow: f.id }))
+      .map((f) => ({ discharge: localDischarge(f, station), stage: valueAt(f, station, (s) => s.wsel, 'upstream'), flow: f.id }))
       .filter((p): p is { discharge: number; stage: number; flow: string } => p.stage !== null)
       .sort((a, b) => a.discharge - b.discharge),
   }));
