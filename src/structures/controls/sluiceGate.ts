@@ -59,7 +59,16 @@ export function sluiceGateControl(spec: SluiceGateSpec, where: string, units: Un
             id: spec.id,
             type: 'sluice-gate',
             station: spec.station,
-            values: { condition: 'clear of the flow', opening: spec.opening, gateWidth: width, upstreamDepth: depth, discharge: ctx.discharge },
+            values: {
+              condition: 'clear of the flow',
+              discharge: ctx.discharge,
+              opening: spec.opening,
+              gateWidth: width,
+              upstreamDepth: depth,
+              headwaterDepth: depth,
+              headwaterStage: ctx.upstreamBedElevation + depth,
+              downstreamSupercriticalDepth: null,
+            },
             notes: [`at this discharge the water does not reach the gate lip (opening ${spec.opening}): the gate does not act; the channel flows open through it`, structureCaution],
           },
         };

@@ -46,3 +46,14 @@ describe('sluiceGateControl', () => {
     expect(flow.jumps).toHaveLength(0);
   });
 });
+
+describe('sluiceGateControl in a whole-channel run', () => {
+  it('sluiceGateControl: the headwater rises with discharge, free and drowned', () => {
+    let previous = -Infinity;
+    for (const q of [1, 2, 4, 6, 8]) {
+      const hw = value(structureOf(run(channelWith({ id: 's', type: 'sluice-gate', station: 100, opening: 0.4 }, { section: rect(4), discharge: q, slope: 0.0008, downstream: { type: 'normal' } }))), 'headwaterStage');
+      expect(hw).toBeGreaterThan(previous);
+      previous = hw;
+    }
+  });
+});

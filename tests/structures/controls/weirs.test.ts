@@ -84,3 +84,22 @@ describe('roadOverflowControl', () => {
     expect(value(structureOf(flow), 'headOverCrest')).toBeCloseTo(H, 6);
   });
 });
+
+describe('weir controls in a whole-channel run', () => {
+  it('every weir control: the headwater rises with discharge (free and, at the higher flows, submerged)', () => {
+    const specs = [
+      { id: 's', type: 'sharp-crested-weir', station: 200, crestElevation: 101.2, crestLength: 3 },
+      { id: 's', type: 'v-notch-weir', station: 200, vertexElevation: 100.8, notchAngle: 90 },
+      { id: 's', type: 'broad-crested-weir', station: 200, crestElevation: 101.0, crestWidth: 3 },
+      { id: 's', type: 'road-overflow', station: 200, crestElevation: 101.0, overtoppedLength: 3 },
+    ] as const;
+    for (const spec of specs) {
+      let previous = -Infinity;
+      for (const q of [0.05, 0.2, 0.5, 1, 2, 4]) {
+        const hw = value(structureOf(run(channelWith(spec, { section: rect(3), discharge: q, downstream: { type: 'normal' } }))), 'headwaterStage');
+        expect(hw, `${spec.type} at Q = ${q}`).toBeGreaterThan(previous);
+        previous = hw;
+      }
+    }
+  });
+});
