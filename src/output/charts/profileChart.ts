@@ -201,8 +201,17 @@ export function profileChart(run: RunResult, options: ProfileChartOptions = {}):
           ? key.add(words.critical(flow.id), pick(palette.critical, i), dash.critical)
           : key.add(words.normal(flow.id), pick(palette.normal, i), dash.normal);
       flow.reaches.forEach((reach, j) => {
-        const pts = stationsOfReach(flow, reach).map((s) => {
-          const d = guideDepth(s, reach, which);
+        const along = stationsOfReach(flow, reach);
+        const depths = along.map((s) => guideDepth(s, reach, which));
+        // A station at a reach end may carry the next reach's value (a break, or a flow change splitting one
+        // reach in two): where the reach's inside stations all agree (a prismatic reach at one discharge),
+        // the line keeps that value to both ends instead of bending to the neighbour's.
+        const lo = Math.min(reach.from, reach.to);
+        const hi = Math.max(reach.from, reach.to);
+        const inside = depths.filter((_, k) => along[k]!.station > lo && along[k]!.station < hi);
+        const common = inside.length > 0 && inside.every((d) => d !== null && d === inside[0]) ? inside[0]! : null;
+        const pts = along.map((s, k) => {
+          const d = common !== null && (s.station === lo || s.station === hi) ? common : depths[k]!;
           return { station: s.station, elevation: d === null ? null : s.bedElevation + d };
         });
         pieces(pts, name, `${which}:${i}:${j}`, { flow: flow.id, reach: reach.id }, lines);

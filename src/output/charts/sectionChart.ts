@@ -107,7 +107,8 @@ export function sectionChart(input: SectionChartInput): TopLevelSpec {
   const hasBanks = input.banks && (isFiniteNumber(input.banks.left) || isFiniteNumber(input.banks.right));
   if (hasBanks) key.add(words.bankStation, palette.bank, dash.solid);
   const zones = (input.zones ?? []).filter((z) => isFiniteNumber(z.from) && isFiniteNumber(z.to));
-  const boundaries = [...new Set(zones.flatMap((z) => [z.from, z.to]))].sort((a, b) => a - b);
+  // rounded as the ground offsets are, so a zone ending at the end of the ground is not drawn as a boundary
+  const boundaries = [...new Set(zones.flatMap((z) => [r(z.from), r(z.to)]))].sort((a, b) => a - b);
   const xr = extent(ground.map((g) => g.offset)) ?? [0, 1];
   const inner = boundaries.filter((b) => b > xr[0] && b < xr[1]);
   if (inner.length) key.add(words.zoneBoundary, palette.zone, dash.zone);
