@@ -20,7 +20,7 @@ import type { FlowResult } from '../results/types.js';
 import { type ModelRun, type RunOptions, runModel } from '../run.js';
 import { boundedLeastSquares, jacobianOf, solveLinear } from './leastSquares.js';
 import * as say from './messages.js';
-import { withRoughnessMultipliers } from './roughness.js';
+import { refuseSurveyedRoughness, withRoughnessMultipliers } from './roughness.js';
 import { sampleProfile, stationRange } from './sample.js';
 import { atCriticalFraction, insensitiveMarkFraction, jacobianStep, multiplierBounds } from './tolerances.js';
 
@@ -43,8 +43,8 @@ export interface CalibrationOptions {
   readonly perReach?: boolean;
   readonly lower?: number;
   readonly upper?: number;
-  /** method and output spacing for every run */
-  readonly run?: Pick<RunOptions, 'method' | 'outputSpacing'>;
+  /** options of every run (method, output spacing, the model file for surveyed reaches...) */
+  readonly run?: Omit<RunOptions, 'adjustInput' | 'compare' | 'onProgress'>;
   /** after each accepted step of the fit */
   readonly onIteration?: (iteration: number, cost: number) => void;
 }
@@ -232,6 +232,7 @@ function standardErrors(jacobian: readonly number[][], residuals: readonly numbe
 /** Fit roughness multipliers to high-water marks. */
 export function calibrateRoughness(model: Model, marks: readonly ObservedMark[], options: CalibrationOptions = {}): Calibration {
   if (marks.length === 0) throw new InputError({ where: 'marks', message: say.noMarks() });
+  refuseSurveyedRoughness(model, 'calibration');
   const lower = options.lower ?? multiplierBounds.lower;
   const upper = options.upper ?? multiplierBounds.upper;
   const unit = model.units === 'US' ? 'ft' : 'm';

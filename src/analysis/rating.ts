@@ -38,7 +38,7 @@ export interface RatingTable {
 }
 
 export interface RatingOptions {
-  readonly run?: Pick<RunOptions, 'method' | 'outputSpacing' | 'onProgress'>;
+  readonly run?: Omit<RunOptions, 'adjustInput' | 'compare'>;
   /** where the stations came from, for messages (default "--stations") */
   readonly stationsWhere?: string;
 }

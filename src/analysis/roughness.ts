@@ -9,7 +9,11 @@
  */
 import type { Section, SubsectionElements } from '../geometry/section.js';
 import type { HydraulicSection } from '../hydraulics/hydraulicSection.js';
+import { InputError } from '../core/errors.js';
+import { isSurveyReach } from '../input/model/survey.js';
+import type { Model } from '../input/model/types.js';
 import type { ProfileInput, ReachInput } from '../profile/types.js';
+import * as say from './messages.js';
 
 type SubsectionsInto = (depth: number, out: Float64Array) => number;
 
@@ -73,4 +77,14 @@ export function withRoughnessMultipliers(input: ProfileInput, multiplierOf: (rea
     return { ...reach, section: wrap(reach.section, m) };
   });
   return { ...input, reaches };
+}
+
+/**
+ * Roughness multipliers reach prismatic reaches only: a surveyed reach's sections are rebuilt from its survey
+ * files (and blended between surveyed ones) after the engine input is made, so a multiplier on the input
+ * would be silently lost there. Refused, naming the reach, rather than giving a result that ignores it.
+ */
+export function refuseSurveyedRoughness(model: Model, what: string): void {
+  const i = model.reaches.findIndex((r) => isSurveyReach(r));
+  if (i >= 0) throw new InputError({ where: `reaches[${i}].survey`, message: say.surveyedRoughness(what, model.reaches[i]!.id) });
 }

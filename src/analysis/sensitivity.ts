@@ -13,6 +13,7 @@ import type { FlowResult } from '../results/types.js';
 import { type ModelRun, type RunOptions, runModel } from '../run.js';
 import * as say from './messages.js';
 import { sampleProfile, stationRange } from './sample.js';
+import { refuseSurveyedRoughness } from './roughness.js';
 import { jumpShiftFraction } from './tolerances.js';
 import { type SensitivityCase, type Variation, sensitivityCases, variedInput } from './variation.js';
 
@@ -164,6 +165,7 @@ function flowSensitivity(baseFlow: FlowResult, cases: readonly { case: Sensitivi
 
 /** Run the base and every varied case; envelope, profile-type and jump changes per flow. */
 export function sensitivityAnalysis(model: Model, variations: readonly Variation[], options: SensitivityOptions = {}): SensitivityRun {
+  if (variations.some((v) => v.parameter === 'n')) refuseSurveyedRoughness(model, 'a sensitivity to roughness');
   const cases = sensitivityCases(variations);
   const warnings: string[] = [];
   const runs: { case: SensitivityCase; run: ModelRun }[] = [];

@@ -105,6 +105,8 @@ export function buildProgram(streams: Streams, setCode: (code: number) => void):
     .option('--csv <file>', 'write the mark table (residuals) to a CSV file')
     .option('--out <dir>', 'write calibration.json, marks.csv and the chart of marks and calibrated profile')
     .option('--force', 'accept a roughness outside the usual range')
+    .option('--allow-outside', 'let surveyed reaches read files outside the model folder')
+    .option('--no-interpolate', 'do not insert interpolated sections between surveyed ones')
     .action(async (model: string, options) => {
       const { calibrateCommand } = await import('./commands/calibrate.js');
       setCode(await calibrateCommand(model, options, streams));
@@ -122,6 +124,8 @@ export function buildProgram(streams: Streams, setCode: (code: number) => void):
     .option('--csv <file>', 'write the rating table to a CSV file')
     .option('--out <dir>', 'write rating.json, rating.csv and the rating-curve chart')
     .option('--force', 'accept a roughness outside the usual range')
+    .option('--allow-outside', 'let surveyed reaches read files outside the model folder')
+    .option('--no-interpolate', 'do not insert interpolated sections between surveyed ones')
     .action(async (model: string, options) => {
       const { ratingCommand } = await import('./commands/rating.js');
       setCode(await ratingCommand(model, options, streams));

@@ -11,6 +11,8 @@ import { InputError } from '../../src/core/errors.js';
 import type { Model } from '../../src/input/model/types.js';
 import { runModel } from '../../src/run.js';
 import { assertInDelta } from '../helpers/assert.js';
+import { readModelFile } from '../../src/input/model/parse.js';
+import { validateModel } from '../../src/input/model/validate.js';
 import { gaussian, mildToSteepModel, seeded, twoReachModel } from './models.js';
 
 /** Marks at `stations` of every flow, from a run with multiplier `of(reach)`, plus noise from `noise()`. */
@@ -86,6 +88,38 @@ describe('calibrateRoughness', () => {
     expect(fit.marks.filter((m) => m.insensitive)).toHaveLength(1);
     expect(fit.warnings).toContain(
       'mark at station 1000 (flow design): roughness hardly moves the water surface here (0.0000 m for a change of the multiplier by 0.1): the flow passes through critical depth at station 1000; it tells nothing about roughness',
+    );
+  });
+
+  it('calibrateRoughness warns about a mark in the pool a weir holds, naming the weir', () => {
+    // a free sharp-crested weir fixes its headwater by the weir equation (Kindsvater–Carter), whatever the
+    // channel's roughness: the pool just upstream cannot inform n; the channel below it can
+    const model = validateModel(
+      {
+        title: 'Invented gauging weir',
+        units: 'SI',
+        sections: { channel: { shape: 'rectangular', bottomWidth: 4, n: 0.03 } },
+        reaches: [
+          { id: 'pool', section: 'channel', length: 300, slope: 0.001 },
+          { id: 'below', section: 'channel', length: 300, slope: 0.001 },
+        ],
+        flows: [{ id: 'test', discharge: 3 }],
+        structures: [{ id: 'gauge weir', type: 'sharp-crested-weir', station: 300, crestElevation: 2, crestLength: 4 }],
+        boundaries: { downstream: { type: 'normal' } },
+      },
+      'weir.json',
+    );
+    const fit = calibrateRoughness(model, marksFrom(model, () => 1.25, [20, 295, 450]));
+    assertInDelta(fit.multipliers[0]!.multiplier, 1.25, 1e-3, 'multiplier');
+    expect(fit.marks.map((m) => m.insensitive)).toEqual([false, true, false]);
+    expect(fit.warnings).toHaveLength(1);
+    expect(fit.warnings[0]).toMatch(/^mark at station 295 \(flow test\): roughness hardly moves the water surface here .*: the water surface is held by the sharp-crested weir at station 300;/);
+  });
+
+  it('calibrateRoughness refuses a model with surveyed reaches (their sections are rebuilt from the survey)', () => {
+    const model = readModelFile('samples/survey-drain/model.json');
+    expect(() => calibrateRoughness(model, [{ station: 10, elevation: 12, flow: model.flows[0]!.id }])).toThrow(
+      /^reaches\[\d+\]\.survey: calibration scales the roughness of prismatic reaches only; reach "[^"]+" is surveyed/,
     );
   });
 

@@ -72,7 +72,7 @@ describe('withRoughnessMultipliers', () => {
     };
     const of: Record<string, number> = { a: 1.5, b: 1.5, c: 1 };
     const out = withRoughnessMultipliers(input, (id) => of[id]!);
-    const [a, b, c] = out.reaches as { section: typeof rect }[];
+    const [a, b, c] = out.reaches as unknown as { section: typeof rect }[];
     expect(a!.section).toBe(b!.section);
     expect(c!.section).toBe(rect);
     assertRelative(conveyance(a!.section, 1), conveyance(rect, 1) / 1.5, 1e-14);

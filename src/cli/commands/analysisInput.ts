@@ -26,6 +26,15 @@ export interface CommonFlags {
   method?: string;
   step?: string;
   out?: string;
+  force?: boolean;
+  allowOutside?: boolean;
+  /** false with --no-interpolate */
+  interpolate?: boolean;
+}
+
+/** The run options that tell runModel where the model's survey files are and how to read them. */
+export function fileOptions(path: string, flags: CommonFlags): { modelFile: string; allowOutside: boolean; interpolate: boolean; force: boolean } {
+  return { modelFile: path, allowOutside: flags.allowOutside === true, interpolate: flags.interpolate !== false, force: flags.force === true };
 }
 
 /** --method and --step as run options; problems go to the reader. */

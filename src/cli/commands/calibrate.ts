@@ -13,7 +13,7 @@ import { readModelFile } from '../../input/model/parse.js';
 import { type Streams, exitCode, toJson } from '../print.js';
 import { type ProgressStream, createProgress } from '../progress.js';
 import { calibrationChart, calibrationCsv, calibrationJson, calibrationText, chartFiles, jsonText } from './analysisReport.js';
-import { type CommonFlags, modelProblems, readFlagFile, runFlags, writeCsvFile, writeFiles } from './analysisInput.js';
+import { type CommonFlags, fileOptions, modelProblems, readFlagFile, runFlags, writeCsvFile, writeFiles } from './analysisInput.js';
 
 export interface CalibrateFlags extends CommonFlags {
   marks?: string;
@@ -21,7 +21,6 @@ export interface CalibrateFlags extends CommonFlags {
   bounds?: string;
   json?: boolean;
   csv?: string;
-  force?: boolean;
 }
 
 export async function calibrateCommand(path: string, flags: CalibrateFlags, streams: Streams, progressStream: ProgressStream = process.stderr): Promise<number> {
@@ -49,7 +48,7 @@ export async function calibrateCommand(path: string, flags: CalibrateFlags, stre
       {
         perReach: flags.perReach === true,
         ...(bounds ?? {}),
-        run,
+        run: { ...run, ...fileOptions(path, flags) },
         onIteration: (i, cost) => progress.update(Math.min(i, 40), 40, `fit step ${i}, Σw·r²/2 = ${cost.toExponential(2)}`),
       },
     );

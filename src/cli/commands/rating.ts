@@ -11,14 +11,13 @@ import { readModelFile } from '../../input/model/parse.js';
 import { type Streams, exitCode, toJson } from '../print.js';
 import { type ProgressStream, createProgress } from '../progress.js';
 import { chartFiles, jsonText, ratingCsv, ratingJson, ratingTableChart, ratingText } from './analysisReport.js';
-import { type CommonFlags, modelProblems, runFlags, writeCsvFile, writeFiles } from './analysisInput.js';
+import { type CommonFlags, fileOptions, modelProblems, runFlags, writeCsvFile, writeFiles } from './analysisInput.js';
 
 export interface RatingFlags extends CommonFlags {
   stations?: string;
   discharges?: string;
   json?: boolean;
   csv?: string;
-  force?: boolean;
 }
 
 function collect<T>(reader: FlagReader, read: () => T): T | undefined {
@@ -43,7 +42,7 @@ export async function ratingCommand(path: string, flags: RatingFlags, streams: S
   const progress = createProgress(progressStream);
   let table;
   try {
-    table = ratingTable(model, stations!, discharges!, { run: { ...run, onProgress: (done, total, flow) => progress.update(done, total, flow) } });
+    table = ratingTable(model, stations!, discharges!, { run: { ...run, ...fileOptions(path, flags), onProgress: (done, total, flow) => progress.update(done, total, flow) } });
   } catch (error) {
     throw modelProblems(path, error);
   } finally {

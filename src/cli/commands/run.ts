@@ -86,7 +86,18 @@ export async function runCommand(path: string, options: RunOptions, streams: Str
     throw error;
   }
   progress.finish();
-  run = analysis.finish(run, { ...(method === undefined ? {} : { method }), ...(step === undefined ? {} : { outputSpacing: step }) }, progressStream);
+  run = analysis.finish(
+    run,
+    {
+      ...(method === undefined ? {} : { method }),
+      ...(step === undefined ? {} : { outputSpacing: step }),
+      modelFile: path,
+      allowOutside: options.allowOutside === true,
+      interpolate: options.interpolate !== false,
+      force: options.force === true,
+    },
+    progressStream,
+  );
 
   if (options.out !== undefined) {
     checkStations(run.result.flows, sections, energyAt, options.energyFlow);

@@ -34,7 +34,7 @@ export interface RunAnalysis {
   adjustInput?: (input: ProfileInput, index: number) => ProfileInput;
   notes: string[];
   /** after the base run: the sensitivity cases, with `sensitivity` added to the result */
-  finish(run: ModelRun, options: Pick<RunOptions, 'method' | 'outputSpacing'>, progressStream: ProgressStream): ModelRun;
+  finish(run: ModelRun, options: Omit<RunOptions, 'compare' | 'adjustInput' | 'onProgress'>, progressStream: ProgressStream): ModelRun;
   /** after the run is printed: the envelope table (text mode) and the band chart (with --out) */
   print(run: ModelRun, flags: { json?: boolean; out?: string }, streams: Streams): Promise<void>;
 }
