@@ -7,6 +7,8 @@ export interface Machine {
   readonly memoryGiB: number;
   readonly node: string;
   readonly platform: string;
+  /** 1-minute load average when asked: the figures are only as steady as the machine was quiet */
+  readonly load: number;
 }
 
 export function machine(): Machine {
@@ -17,9 +19,10 @@ export function machine(): Machine {
     memoryGiB: Math.round(os.totalmem() / 2 ** 30),
     node: process.version,
     platform: `${os.platform()} ${os.release()} ${os.arch()}`,
+    load: os.loadavg()[0] ?? NaN,
   };
 }
 
 export function describeMachine(m: Machine): string {
-  return `${m.cpu}, ${m.cores} cores, ${m.memoryGiB} GiB, Node ${m.node}, ${m.platform}`;
+  return `${m.cpu}, ${m.cores} cores, ${m.memoryGiB} GiB, Node ${m.node}, ${m.platform}, load average ${m.load.toFixed(1)}`;
 }

@@ -31,13 +31,13 @@ const defaultAccuracy = `default goal: ${accuracyGoal.SI * 1000} mm or ${accurac
 async function median(
   name: string,
   fn: () => unknown,
-  options: { time: number; iterations: number; beforeEach?: () => void },
+  options: { time: number; iterations: number; warmups?: number; beforeEach?: () => void },
 ): Promise<number> {
   const bench = new Bench({
     name,
     time: quick ? options.time / 4 : options.time,
     iterations: quick ? Math.max(2, options.iterations >> 2) : options.iterations,
-    warmupIterations: quick ? 1 : 3,
+    warmupIterations: quick ? 1 : (options.warmups ?? 3),
   });
   bench.add(name, fn, options.beforeEach ? { beforeEach: options.beforeEach } : {});
   await bench.run();
@@ -72,7 +72,7 @@ async function surveyed(figures: Figure[]): Promise<void> {
     survey = buildSurvey();
   };
   const fn = real ? () => runSurveyedEngine(survey) : () => runSurveyedStandIn(survey);
-  const value = await median(name, fn, { time: 0, iterations: 5, beforeEach: fresh });
+  const value = await median(name, fn, { time: 0, iterations: 3, warmups: 1, beforeEach: fresh });
   figures.push({
     name: real ? name : `${name} [STAND-IN: engine has no surveyed reaches yet]`,
     value,
@@ -148,4 +148,5 @@ await prismatic(figures);
 await lookups(figures);
 await surveyed(figures);
 console.log(table(figures));
+console.log(`load average at the end: ${machine().load.toFixed(1)} (on ${machine().cores} cores; well above that, every figure is inflated)`);
 if (process.env.GVF_BENCH_JSON) console.log(JSON.stringify({ machine: machine(), figures }, null, 2));
