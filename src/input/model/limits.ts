@@ -23,3 +23,6 @@ export const largestMagnitude = 1e7;
 
 /** At most this many output stations per flow (10 km every 0.1 m): a bound on memory and time, not physics. */
 export const maxOutputStations = 100_000;
+
+/** Lists and objects nest at most this deep in a model file (a model needs five or six levels; the checks recurse). */
+export const maxNesting = 64;

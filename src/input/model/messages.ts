@@ -3,7 +3,7 @@
  * per message, so wording is reviewed in one place and tests pin it exactly. A message says what was found
  * and what is accepted; the place (JSON path or flag) is the Problem's `where`.
  */
-import { manningRange, alphaRange, slopeLimit, minimumPoints, largestMagnitude, maxOutputStations } from './limits.js';
+import { manningRange, alphaRange, slopeLimit, minimumPoints, largestMagnitude, maxNesting, maxOutputStations } from './limits.js';
 
 /** A value as a user would recognise it in their file. */
 export function describeValue(value: unknown): string {
@@ -107,6 +107,9 @@ export const fileEmpty = (): string =>
   'the file is empty; expected a JSON object holding the model (see schema/gvf-model.schema.json)';
 
 export const jsonSyntax = (problem: string): string => `not valid JSON: ${problem}`;
+
+export const tooDeep = (): string =>
+  `lists and objects nest more than ${maxNesting} levels deep here; a gvf model nests a few levels (see schema/gvf-model.schema.json)`;
 
 export const notUtf8 = (): string =>
   'the file is not UTF-8 text (it holds NUL bytes: saved as UTF-16, or not a text file); save it as UTF-8';

@@ -4,7 +4,8 @@
  */
 import { readFileSync } from 'node:fs';
 import { InputError } from '../../core/errors.js';
-import { findJsonSyntaxProblem } from './jsonPosition.js';
+import { findJsonSyntaxProblem, lineColumn } from './jsonPosition.js';
+import { maxNesting } from './limits.js';
 import * as msg from './messages.js';
 import type { Model } from './types.js';
 import { ModelFileError, type ValidateOptions, validateModel } from './validate.js';
@@ -24,7 +25,30 @@ export function parseModelText(text: string, fileLabel: string, options: Validat
     const problem = found?.message ?? (error instanceof Error ? error.message : String(error));
     throw new ModelFileError(fileLabel, [{ where, message: msg.jsonSyntax(problem) }]);
   }
+  // valid JSON nested thousands deep would overflow the call stack of the checks that walk it
+  const deep = nestedTooDeep(body, maxNesting);
+  if (deep !== undefined) {
+    const { line, column } = lineColumn(body, deep);
+    throw new ModelFileError(fileLabel, [{ where: `${fileLabel}:${line}:${column}`, message: msg.tooDeep() }]);
+  }
   return validateModel(json, fileLabel, options);
+}
+
+/** The offset where valid JSON `text` first opens more than `limit` lists and objects, if it does. */
+function nestedTooDeep(text: string, limit: number): number | undefined {
+  let depth = 0;
+  let inString = false;
+  for (let i = 0; i < text.length; i++) {
+    const c = text[i];
+    if (inString) {
+      if (c === '\\') i++;
+      else if (c === '"') inString = false;
+    } else if (c === '"') inString = true;
+    else if (c === '[' || c === '{') {
+      if (++depth > limit) return i;
+    } else if (c === ']' || c === '}') depth--;
+  }
+  return undefined;
 }
 
 /** Read and validate a model file. */
