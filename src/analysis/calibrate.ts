@@ -300,7 +300,7 @@ export function calibrateRoughness(model: Model, marks: readonly ObservedMark[],
   const markRows: MarkResidual[] = marks.map((mark, i) => {
     const sensitivity = Math.sqrt(dW[i]!.reduce((s, v) => s + v * v, 0));
     const insensitive = sensitivity < insensitiveMarkFraction * depths[i]!;
-    if (insensitive) warnings.push(say.insensitiveMark(mark.station, mark.flow, 0.1 * sensitivity, unit, whyInsensitive(flowOf(run, mark.flow), mark.station)));
+    if (insensitive) warnings.push(say.insensitiveMark(mark.station, mark.flow, say.shownMultiplierChange * sensitivity, unit, whyInsensitive(flowOf(run, mark.flow), mark.station)));
     return {
       station: mark.station,
       flow: mark.flow,

@@ -37,7 +37,9 @@ export const markFlowUnknown = (flow: string, known: readonly string[]) =>
   `mark names flow ${JSON.stringify(flow)}, which is not in the model (flows: ${known.join(', ')})`;
 export const insensitiveMark = (station: number, flow: string, change: number, unit: string, why: string) =>
   `mark at station ${station} (flow ${flow}): roughness hardly moves the water surface here ` +
-  `(${fmt(change, 4)} ${unit} for a change of the multiplier by 0.1): ${why}; it tells nothing about roughness`;
+  `(${fmt(change, 4)} ${unit} for a change of the multiplier by ${shownMultiplierChange}): ${why}; it tells nothing about roughness`;
+/** The change of multiplier a warning states the water-surface response for (a 10 % change of n). */
+export const shownMultiplierChange = 0.1;
 export const whyCritical = (station: number) => `the flow passes through critical depth at station ${station}`;
 export const whyControl = (kind: string, station: number) => `the water surface is held by the ${kind} at station ${station}`;
 export const whyUnknown = () => 'it lies in a stretch held by a control (critical depth, a structure or a fixed stage)';

@@ -5,6 +5,7 @@
  */
 import { calibrateRoughness } from '../../analysis/calibrate.js';
 import { parseBounds } from '../../analysis/options.js';
+import { lmMaxIterations } from '../../analysis/tolerances.js';
 import { InputError } from '../../core/errors.js';
 import { unitsOf } from '../../core/units.js';
 import { readHighWaterMarks } from '../../input/csv/marks.js';
@@ -49,7 +50,7 @@ export async function calibrateCommand(path: string, flags: CalibrateFlags, stre
         perReach: flags.perReach === true,
         ...(bounds ?? {}),
         run: { ...run, ...fileOptions(path, flags) },
-        onIteration: (i, cost) => progress.update(Math.min(i, 40), 40, `fit step ${i}, Σw·r²/2 = ${cost.toExponential(2)}`),
+        onIteration: (i, cost) => progress.update(Math.min(i, lmMaxIterations), lmMaxIterations, `fit step ${i}, Σw·r²/2 = ${cost.toExponential(2)}`),
       },
     );
   } catch (error) {
