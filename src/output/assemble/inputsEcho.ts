@@ -8,49 +8,9 @@ import type { UnitSystem } from '../../core/units.js';
 import type { Model } from '../../input/model/types.js';
 import type { RunResult } from '../../results/types.js';
 import type { ReportInputs, ReportItem, ReportValue } from '../report/html.js';
+import { labelOf, unitOf, unitWord } from '../report/quantities.js';
 
-/** Words for keys whose camelCase name does not read well on its own. */
-const labels: Record<string, string> = {
-  n: "Manning's n",
-  chezy: 'Chézy C',
-  ks: 'Sand roughness ks',
-  alpha: 'Energy coefficient α',
-  sideSlope: 'Side slope (H:1V)',
-  sideSlopeRight: 'Right side slope (H:1V)',
-  slope: 'Bed slope (fraction)',
-  type: 'Type',
-  shape: 'Shape',
-  section: 'Section',
-  elevation: 'Elevation',
-};
-
-/** The physical kind of a key's value, recognised from its name; null for pure numbers. */
-function kindOf(key: string): 'length' | 'discharge' | 'area' | 'velocity' | null {
-  const k = key.toLowerCase();
-  if (k === 'ks') return 'length';
-  if (/area$/.test(k)) return 'area';
-  if (/velocity/.test(k)) return 'velocity';
-  if (/discharge|inflowrate|^q$/.test(k)) return 'discharge';
-  if (/(width|length|depth|diameter|elevation|height|station|opening|crest|head|freeboard|offset|rise|span|drop|stage)$/.test(k)) return 'length';
-  return null;
-}
-
-const unitWords: Record<UnitSystem, Record<'length' | 'discharge' | 'area' | 'velocity', string>> = {
-  SI: { length: 'm', discharge: 'm³/s', area: 'm²', velocity: 'm/s' },
-  US: { length: 'ft', discharge: 'ft³/s', area: 'ft²', velocity: 'ft/s' },
-};
-
-/** "bottomWidth" → "Bottom width", "downstreamBedElevation" → "Downstream bed elevation". */
-export function labelOf(key: string): string {
-  const known = labels[key];
-  if (known !== undefined) return known;
-  const words = key
-    .replace(/([a-z0-9])([A-Z])/g, '$1 $2')
-    .replace(/[_-]+/g, ' ')
-    .toLowerCase()
-    .trim();
-  return words.charAt(0).toUpperCase() + words.slice(1);
-}
+export { labelOf };
 
 type Plain = string | number | boolean | null;
 const isPlain = (v: unknown): v is Plain => v === null || ['string', 'number', 'boolean'].includes(typeof v);
@@ -73,8 +33,8 @@ export function rowsOf(value: Record<string, unknown>, units: UnitSystem, skip: 
     if (skip.includes(key) || v === undefined) continue;
     const label = prefix ? `${prefix}: ${labelOf(key).toLowerCase()}` : labelOf(key);
     if (isPlain(v)) {
-      const kind = typeof v === 'number' ? kindOf(key) : null;
-      rows.push(kind ? { label, value: v, unit: unitWords[units][kind] } : { label, value: v });
+      const unit = typeof v === 'number' ? unitOf(key, units) : undefined;
+      rows.push(unit ? { label, value: v, unit } : { label, value: v });
     } else if (Array.isArray(v)) {
       rows.push({ label, value: listText(key, v) });
     } else if (typeof v === 'object') {
@@ -105,7 +65,7 @@ export function reportInputsOf(model: Model, run: RunResult): ReportInputs {
   const reaches: ReportItem[] = model.reaches.map((reach, i) => {
     const computed = first?.reaches.find((r) => r.id === reach.id) ?? first?.reaches[i];
     const rows = rowsOf(reach as unknown as Record<string, unknown>, units, ['id']);
-    if (computed) rows.push({ label: 'From station', value: computed.from, unit: unitWords[units].length }, { label: 'To station', value: computed.to, unit: unitWords[units].length });
+    if (computed) rows.push({ label: 'From station', value: computed.from, unit: unitWord('length', units) }, { label: 'To station', value: computed.to, unit: unitWord('length', units) });
     return { id: reach.id, rows };
   });
   const structures = Array.isArray(loose.structures) ? listItems(loose.structures, units, 'structure') : [];
@@ -116,7 +76,7 @@ export function reportInputsOf(model: Model, run: RunResult): ReportInputs {
   const flows = listItems(model.flows, units, 'flow');
   const channel: ReportItem = {
     id: 'Channel',
-    rows: [{ label: 'Downstream bed elevation', value: model.downstreamBedElevation, unit: unitWords[units].length }],
+    rows: [{ label: 'Downstream bed elevation', value: model.downstreamBedElevation, unit: unitWord('length', units) }],
   };
   const other: { heading: string; items: ReportItem[] }[] = [];
   if (typeof loose.description === 'string' && loose.description.trim() !== '') {

@@ -7,10 +7,11 @@
  * Pure: buildReport takes the run, the inputs as label/value rows (the results layer fills them), the charts
  * as SVG strings, and returns the page as a string. All user text is escaped.
  */
-import type { FlowResult, FreeboardRow, RunResult, StationResult, StructureResult } from '../../results/types.js';
+import type { FlowResult, FreeboardRow, ReachResult, RunResult, StationResult, StructureResult } from '../../results/types.js';
 import { accuracyGoal } from '../../core/tolerances.js';
 import { escapeHtml as h, checkedSvg } from './escape.js';
 import { reportCss, type Paper } from './css.js';
+import { labelOf, unitOf } from './quantities.js';
 
 /** One echoed input value: "Bottom width | 3 m". */
 export interface ReportValue {
@@ -127,9 +128,9 @@ function inputGroup(title: string, items: readonly ReportItem[]): string {
   return `<h3>${h(title)}</h3>${table(['Id', 'Property', 'Value'], rows)}`;
 }
 
-function profileTypes(flow: FlowResult, reachId: string, u: string): string {
-  const reach = flow.reaches.find((r) => r.id === reachId);
-  if (!reach || reach.profiles.length === 0) return '—';
+function profileTypes(reach: ReachResult, u: string): string {
+  // the reach row's own stretches (one reach id may appear twice, split where its discharge changes)
+  if (reach.profiles.length === 0) return '—';
   return reach.profiles.map((p) => `<b>${h(p.type)}</b> ${num(p.from, 1)}–${num(p.to, 1)} ${h(u)}`).join('<br>');
 }
 
@@ -137,8 +138,9 @@ function freeboardFailures(flow: FlowResult): FreeboardRow[] {
   return (flow.freeboard ?? []).filter((f) => !f.pass || f.overtopped);
 }
 
-function structureBlock(s: StructureResult, u: string): string {
-  const rows = Object.entries(s.values).map(([k, v]) => [h(k), h(valueText(v))]);
+function structureBlock(s: StructureResult, u: string, units: RunResult['units']): string {
+  // a quantity in words with its unit ("Headwater stage | 43.93 m"); ratios and coefficients bare
+  const rows = Object.entries(s.values).map(([k, v]) => [h(labelOf(k)), h(valueText(v, typeof v === 'number' ? unitOf(k, units) : undefined))]);
   const notes = s.notes.length ? `<ul class="plain">${s.notes.map((n) => `<li>${h(n)}</li>`).join('')}</ul>` : '';
   return `<h5 class="item">${h(s.id)}: ${h(s.type)} at station ${num(s.station, 2)} ${h(u)}</h5>${table(['Quantity', 'Value'], rows)}${notes}`;
 }
@@ -157,7 +159,7 @@ function flowSummary(run: RunResult, flow: FlowResult, index: number, controls: 
   const cardHtml = `<div class="cards">${cards.map(([k, v, bad]) => `<div class="card${bad ? ' bad' : ''}"><div class="k">${h(k)}</div><div class="v">${h(v)}</div></div>`).join('')}</div>`;
   const reaches = table(
     ['Reach', `From (${h(u)})`, `To (${h(u)})`, 'Slope class', `Normal depth (${h(u)})`, `Critical depth (${h(u)})`, 'Profile types'],
-    flow.reaches.map((r) => [h(r.id), num(r.from, 2), num(r.to, 2), h(r.slopeClass), r.normalDepth === null ? 'none' : num(r.normalDepth), num(r.criticalDepth), profileTypes(flow, r.id, u)]),
+    flow.reaches.map((r) => [h(r.id), num(r.from, 2), num(r.to, 2), h(r.slopeClass), r.normalDepth === null ? 'none' : num(r.normalDepth), num(r.criticalDepth), profileTypes(r, u)]),
     { numeric: [false, true, true, false, true, true, false] },
   );
   const mine = controls.filter((c) => c.flow === undefined || c.flow === flow.id);
@@ -171,7 +173,7 @@ function flowSummary(run: RunResult, flow: FlowResult, index: number, controls: 
         { numeric: [true, true, true, true, false, true, true] },
       )
     : '<p class="empty">No hydraulic jump.</p>';
-  const structures = (flow.structures ?? []).length ? (flow.structures ?? []).map((s) => structureBlock(s, u)).join('') : '<p class="empty">No structure.</p>';
+  const structures = (flow.structures ?? []).length ? (flow.structures ?? []).map((s) => structureBlock(s, u, run.units)).join('') : '<p class="empty">No structure.</p>';
   const fb = failures.length
     ? table(
         [`Station (${h(u)})`, `Water surface (${h(u)})`, `Energy line (${h(u)})`, `Left freeboard (${h(u)})`, `Right freeboard (${h(u)})`, `Required (${h(u)})`, 'Result'],
