@@ -30,6 +30,7 @@ const typeWords: Record<string, string> = {
   tuple: 'a list [...]',
   object: 'an object {...}',
   boolean: 'true or false',
+  record: 'an object {...} of named entries',
 };
 
 /** The per-parse error map: one message per issue code, from the catalogue. Schema-level messages win over it. */

@@ -43,8 +43,15 @@ export function findJsonSyntaxProblem(text: string): JsonSyntaxProblem | undefin
   const space = () => {
     while (i < text.length && (text[i] === ' ' || text[i] === '\t' || text[i] === '\n' || text[i] === '\r')) i++;
   };
+  // the usual slips from JavaScript and spreadsheets, told with their fix
+  const hint = (at: number): string =>
+    /^-?(?:NaN|Infinity)/.test(text.slice(at, at + 9))
+      ? ' (NaN and Infinity are not numbers in JSON: give a finite number)'
+      : text[at] === '/'
+        ? ' (JSON has no comments: put notes in "description")'
+        : '';
   const fail = (what: string): never => {
-    throw new Stop(i, `expected ${what}, found ${describe(i)}`);
+    throw new Stop(i, `expected ${what}, found ${describe(i)}${hint(i)}`);
   };
   const literal = (word: string) => {
     if (text.startsWith(word, i)) i += word.length;

@@ -103,6 +103,8 @@ export const fileNotFound = (): string => 'no such file';
 
 export const fileUnreadable = (reason: string): string => `cannot read the file (${reason})`;
 
+export const fileIsFolder = (): string => 'this is a folder, not a file: give the path of the model file (a .json file)';
+
 export const fileEmpty = (): string =>
   'the file is empty; expected a JSON object holding the model (see schema/gvf-model.schema.json)';
 

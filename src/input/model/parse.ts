@@ -58,7 +58,8 @@ export function readModelFile(path: string, options: ValidateOptions = {}): Mode
     text = readFileSync(path, 'utf8');
   } catch (error) {
     const code = (error as NodeJS.ErrnoException).code;
-    const message = code === 'ENOENT' ? msg.fileNotFound() : msg.fileUnreadable(code ?? String(error));
+    const message =
+      code === 'ENOENT' ? msg.fileNotFound() : code === 'EISDIR' ? msg.fileIsFolder() : msg.fileUnreadable(code ?? String(error));
     throw new InputError({ where: path, message });
   }
   return parseModelText(text, path, options);

@@ -58,7 +58,7 @@ describe('parseModelText(text, file)', () => {
 
   it('parseModelText(text) refuses NaN and Infinity written as words, and numbers too large for a double', () => {
     expect(problemOf('{"units": NaN}')).toBe(
-      'swale.json:1:11: not valid JSON: expected a value (a number, text in double quotes, true, false, null, [ or {), found "N"',
+      'swale.json:1:11: not valid JSON: expected a value (a number, text in double quotes, true, false, null, [ or {), found "N" (NaN and Infinity are not numbers in JSON: give a finite number)',
     );
     const huge = model.replace('"discharge": 1.5', '"discharge": 1e400');
     expect(problemOf(huge)).toBe('flows[0].discharge: expected a finite number, got Infinity');
