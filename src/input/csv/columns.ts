@@ -69,6 +69,12 @@ export function splitHeader(text: string): { name: string; unit?: string; bare: 
       options.push({ name: normalizeName(word[1] ?? ''), unit, bare: true });
     }
   }
+  // a discharge unit with its slash written as an underscore, as gvf's own CSV headers do (`discharge_m3_s`)
+  const compound = /^(.*?)[\s_.-]+([A-Za-z0-9³^]+)_([A-Za-z]+)\s*$/.exec(trimmed);
+  if (compound) {
+    const unit = unitKey(`${compound[2] ?? ''}/${compound[3] ?? ''}`);
+    if (unit in dischargeUnits) options.push({ name: normalizeName(compound[1] ?? ''), unit, bare: true });
+  }
   return options;
 }
 

@@ -165,7 +165,7 @@ export const fileNotFound = (given: string, resolved: string): string =>
   `file not found: ${resolved} (${show(given)}, relative to the model file's folder)`;
 
 export const notAFile = (given: string, resolved: string): string =>
-  `${show(given)} resolves to ${resolved}, which is not a file`;
+  `${show(given)} resolves to ${resolved}, which is not a file (a folder?): give the path of the CSV file itself`;
 
 export const unreadable = (resolved: string, reason: string): string => `cannot read ${resolved}: ${reason}`;
 
