@@ -189,6 +189,10 @@ export function boundaryFromFlag(reader: FlagReader, flag: string, text: string 
   if (word === 'normal' || word === 'critical') return { type: word };
   const trimmed = text.trim();
   const depth = numeral.test(trimmed) ? Number(trimmed) : Number.NaN;
+  if (Number.isFinite(depth) && depth > largestMagnitude) {
+    reader.problems.push({ where: flag, message: msg.tooLarge(depth), value: depth });
+    return undefined;
+  }
   if (Number.isFinite(depth) && depth > 0) return { type: 'depth', depth };
   reader.problems.push({ where: flag, message: msg.boundaryFlag(text), value: text });
   return undefined;
