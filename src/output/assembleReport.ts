@@ -300,7 +300,7 @@ function ratingPlan(run: ModelRun, stations: readonly { station: number; label: 
   if (!series.some((s) => s.points.length >= 2)) return null;
   return {
     name: 'rating',
-    caption: `Rating curves: water-surface elevation (${u}) against discharge, one point per flow run, at ${stations.slice(0, ratingSeriesLimit).map((s) => s.label.toLowerCase()).join('; ')}.`,
+    caption: `Rating curves: water-surface elevation (${u}) against discharge, one point per flow run, with the discharge at each station: ${stations.slice(0, ratingSeriesLimit).map((s) => s.label).join('; ')}.`,
     spec: ratingChart({ units: result.units, series }),
   };
 }
@@ -384,10 +384,10 @@ export function assembleReport(run: ModelRun, options: ReportOptions = {}): Asse
     const addRating = (station: number, label: string) => {
       if (!ratingStations.some((r) => r.station === station)) ratingStations.push({ station, label });
     };
-    if (range) addRating(range[0], `Upstream end, station ${stationText(range[0])} ${u}`);
-    for (const s of structuresOf(run)) addRating(s.station, `Upstream of ${s.id}, station ${stationText(s.station)} ${u}`);
+    if (range) addRating(range[0], `Upstream end (${stationText(range[0])} ${u})`);
+    for (const s of structuresOf(run)) addRating(s.station, `Above ${s.id} (${stationText(s.station)} ${u})`);
     for (const x of picked) addRating(x, `Station ${stationText(x)} ${u}`);
-    if (range) addRating(range[1], `Downstream end, station ${stationText(range[1])} ${u}`);
+    if (range) addRating(range[1], `Downstream end (${stationText(range[1])} ${u})`);
     const rating = ratingPlan(run, ratingStations);
     if (rating) charts.push({ ...rating, name: uniqueName(rating.name, taken) });
   } else {

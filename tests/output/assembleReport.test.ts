@@ -61,7 +61,7 @@ describe('assembleReport(run)', () => {
     const profile = datasets(charts[0]!.spec);
     expect(profile.structures!.map((s) => s.label)).toEqual(['C<1> (culvert)']);
     const rating = charts.find((c) => c.name === 'rating')!;
-    expect(datasets(rating.spec).rating!.map((r) => r.series)).toEqual(expect.arrayContaining(['Upstream of C<1>, station 400 m']));
+    expect(datasets(rating.spec).rating!.map((r) => r.series)).toEqual(expect.arrayContaining(['Above C<1> (400 m)']));
   });
 
   it('assembleReport(run) energy–force diagram at the toe marks the supercritical depth and its Bélanger sequent depth', () => {

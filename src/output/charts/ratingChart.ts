@@ -48,6 +48,9 @@ export function ratingSeriesFromRun(run: RunResult, stations: readonly number[])
   });
 }
 
+/** Key names longer than this (characters) get two columns instead of three. */
+const legendLongName = 24;
+
 export function ratingChart(input: RatingChartInput): TopLevelSpec {
   const width = input.width ?? size.rating.width;
   const height = input.height ?? size.rating.height;
@@ -61,7 +64,10 @@ export function ratingChart(input: RatingChartInput): TopLevelSpec {
   const xr = extent(rows.map((p) => p.discharge)) ?? [0, 1];
   const yr = extent(rows.map((p) => p.stage)) ?? [0, 1];
   const [yLow, yHigh] = padded(yr, 0.08, 0.08);
-  const colour = key.colour(words.legendTitle, { orient: 'bottom', direction: 'horizontal', columns: 3 });
+  // one key entry per station: two columns when the names are long, so none is cut off at the right
+  const longest = Math.max(0, ...key.series.map((e) => [...e.name].length));
+  const columns = longest > legendLongName ? 2 : 3;
+  const colour = key.colour(words.legendTitle, { orient: 'bottom', direction: 'horizontal', columns, labelLimit: Math.floor(width / columns) - 10, symbolSize: 100 });
   const x = { field: 'discharge', type: 'quantitative', title: words.dischargeAxis(input.units), scale: { domain: [0, r(xr[1] * 1.05)], nice: false } } as const;
   const y = { field: 'stage', type: 'quantitative', title: words.stageAxis(input.units), scale: { domain: [r(yLow), r(yHigh)], nice: false, zero: false } } as const;
   const spec = {
