@@ -16,6 +16,9 @@
  * This module sits above the engine (and results) and below output and the CLI.
  */
 import { assembleProfileInputs, assembleSections } from './assemble.js';
+import { InputError } from './core/errors.js';
+import { maxOutputStations } from './input/model/limits.js';
+import { tooManyStations } from './input/model/messages.js';
 import type { HydraulicSection } from './hydraulics/hydraulicSection.js';
 import type { Model } from './input/model/types.js';
 import { type ChannelSurvey, computeChannelFlow, loadChannelSurvey } from './survey/channel.js';
@@ -99,6 +102,7 @@ export function runModel(model: Model, options: RunOptions = {}): ModelRun {
   const assembled = assembleProfileInputs(model, sections, survey === undefined ? options : { ...options, surveyReaches: survey.reaches });
   const adjust = options.adjustInput;
   const inputs = adjust === undefined ? assembled : assembled.map((input, i) => adjust(input, i));
+  for (const input of inputs) checkOutputSpacing(input, model, options.outputSpacing !== undefined);
   const method = options.method ?? model.method;
   // each flow through the channel: interpolation on surveyed reaches, banks and freeboard, the user's stations
   const computed = inputs.map((input, i) => {
@@ -119,6 +123,20 @@ export function runModel(model: Model, options: RunOptions = {}): ModelRun {
   const run: ModelRun = { result, stages: { model, sections, inputs: computedInputs, ...(survey === undefined ? {} : { survey }) } };
   if (options.compare) run.comparison = compareAll(computedInputs);
   return run;
+}
+
+/**
+ * An output spacing too fine for the prismatic length would fill memory before a depth is computed: refuse it,
+ * naming the smallest spacing allowed (surveyed reaches report at their own stations and do not count).
+ */
+function checkOutputSpacing(input: ProfileInput, model: Model, fromOverride: boolean): void {
+  const spacing = input.outputSpacing;
+  if (spacing === undefined) return;
+  const length = input.reaches.reduce((sum, r) => sum + (r.kind === 'surveyed' ? 0 : r.length), 0);
+  if (!(length / spacing > maxOutputStations)) return;
+  // the override is the CLI's --step (the model's own key is checked with the model file)
+  const where = fromOverride ? '--step' : 'outputSpacing';
+  throw new InputError({ where, message: tooManyStations(spacing, length, model.units === 'US' ? 'ft' : 'm', where), value: spacing });
 }
 
 function compareAll(inputs: readonly ProfileInput[]): MethodComparison {
