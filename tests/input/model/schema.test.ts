@@ -19,7 +19,10 @@ describe('schemaText()', () => {
     const shapes = schema.properties.sections.additionalProperties.oneOf as Array<Record<string, any>>;
     expect(shapes.map((s) => s.properties.shape.const)).toEqual(['rectangular', 'trapezoidal', 'triangular', 'circular', 'points']);
     for (const shape of shapes) expect(shape.additionalProperties).toBe(false);
-    expect(schema.properties.reaches.items.additionalProperties).toBe(false);
+    // a reach is prismatic or surveyed: each kind is closed
+    const reachKinds = schema.properties.reaches.items.anyOf as Array<Record<string, any>>;
+    expect(reachKinds).toHaveLength(2);
+    for (const kind of reachKinds) expect(kind.additionalProperties).toBe(false);
     expect(schema.properties.method.default).toBe('standard-step');
   });
 });
