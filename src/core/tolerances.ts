@@ -101,6 +101,9 @@ export const stopRefinements = 3;
 /** Profile: the ODE method's step bound per integration leg (odex maxSteps), and its bound on switches between y(x) and x(y). */
 export const odeMaxSteps = 100_000;
 export const odeMaxPhases = 8;
+/** Profile: an integration that ends within this fraction of the stations' magnitude of an output station has reached it
+ *  (odex stops up to about ten rounding units short of its end point). */
+export const stationRoundoffFraction = 1e-12;
 
 /* ---- Boundaries and structures (src/profile/reservoir.ts, src/structures/controls) ---- */
 /** Reservoir: the discharge drawn from a pool is found to this fraction of the critical-entrance discharge. */

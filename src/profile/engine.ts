@@ -12,7 +12,7 @@
  *      profile, where the jump toe is located (Chow 1959 §10-7 and §15-1; Henderson 1966 §4.3 and §3.4)
  *   5. assemble   stations with their elements, profile types by zone, jumps, controls, warnings
  */
-import { InputError, type Problem } from '../core/errors.js';
+import { InputError, NumericalError, type Problem } from '../core/errors.js';
 import { accuracyFor, jumpToeTolerance } from '../core/tolerances.js';
 import { flowState } from '../hydraulics/state.js';
 import type { HydraulicSection } from '../hydraulics/hydraulicSection.js';
@@ -309,6 +309,13 @@ function stretchSpec(ctx: Context, piece: Piece, stations: number[], startDepth:
 function run(ctx: Context, spec: StretchSpec): StretchProfile {
   const result = ctx.integrate(spec);
   ctx.steps += result.steps;
+  // a stretch that ends early must say why: a missing depth read as "no profile here" would put a wrong control in
+  if (result.depths.length < spec.stations.length && !result.stop) {
+    throw new NumericalError(
+      `${ctx.input.method} method: the ${spec.regime} profile from station ${show(spec.stations[0]!)} gave depths at ${result.depths.length} of ` +
+        `${spec.stations.length} stations without reaching critical depth or a crown`,
+    );
+  }
   // interpolated output may overshoot a crown by round-off: keep depths inside the section
   const top = spec.hs.section.maxDepth;
   if (Number.isFinite(top)) for (let i = 0; i < result.depths.length; i++) if (result.depths[i]! > top) result.depths[i] = top;

@@ -22,6 +22,7 @@ import {
   odeMaxPhases as maxPhases,
   odeMaxSteps,
   odeToleranceFraction,
+  stationRoundoffFraction,
 } from '../core/tolerances.js';
 import { depthGradient } from './energy.js';
 import {
@@ -48,14 +49,19 @@ class Output {
   readonly depths: number[] = [];
   next = 1;
   steps = 0;
-  constructor(readonly spec: StretchSpec, readonly direction: number) {}
+  /** round-off of a station: odex ends an integration up to about ten rounding units short of its end */
+  readonly slack: number;
+  constructor(readonly spec: StretchSpec, readonly direction: number) {
+    const s = spec.stations;
+    this.slack = stationRoundoffFraction * Math.max(Math.abs(s[0]!), Math.abs(s[s.length - 1]!), Math.abs(s[s.length - 1]! - s[0]!));
+  }
   /** the next station still to fill, or undefined */
   get pending(): number | undefined {
     return this.spec.stations[this.next];
   }
-  /** true when x is at or beyond station s in the direction of integration */
+  /** true when x is at or beyond station s in the direction of integration (to within round-off) */
   reached(s: number, x: number): boolean {
-    return this.direction * (x - s) >= 0;
+    return this.direction * (x - s) >= -this.slack;
   }
 }
 
