@@ -10,7 +10,7 @@
  */
 import { HydraulicError, InputError } from './core/errors.js';
 import { type UnitSystem, unitsOf } from './core/units.js';
-import { hydraulicSectionOf } from './assemble.js';
+import { hydraulicSectionOf } from './assembleSection.js';
 import { criticalDepths as findCriticalDepths, criticalDepth as leastEnergyCriticalDepth } from './hydraulics/criticalDepth.js';
 import { depthTolerance } from './hydraulics/depthSearch.js';
 import { normalDepths as findNormalDepths } from './hydraulics/normalDepth.js';

@@ -25,7 +25,7 @@ import { resolveRoughness } from '../input/model/rules.js';
 import { type SurveySpec, surveyDefaults } from '../input/model/survey.js';
 import type { SectionSpec } from '../input/model/types.js';
 import type { SurveyNode } from '../profile/types.js';
-import { hydraulicSectionOf } from '../assemble.js';
+import { hydraulicSectionOf } from '../assembleSection.js';
 import type { SurveyFiles } from './files.js';
 import { bedMismatchTolerance } from './tolerances.js';
 
