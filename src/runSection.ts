@@ -8,6 +8,7 @@
  * Values that do not exist are null, with a note saying why (no normal depth on a horizontal bed, a conduit
  * flowing full); Infinity (hydraulic depth at a conduit's crown) is reported as null, never as a number.
  */
+import { screeningCaution } from './core/cautions.js';
 import { HydraulicError, InputError } from './core/errors.js';
 import { type UnitSystem, unitsOf } from './core/units.js';
 import { hydraulicSectionOf } from './assembleSection.js';
@@ -93,8 +94,7 @@ export interface SectionRunResult {
   cautions: string[];
 }
 
-export const screeningCaution =
-  'Results are a screening aid: channels, conduits and structures that protect people or property must be designed and checked by a licensed engineer under local codes and agency criteria.';
+export { screeningCaution };
 
 export function unitLabelsOf(system: UnitSystem): UnitLabels {
   const u = unitsOf(system);

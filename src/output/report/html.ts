@@ -7,6 +7,7 @@
  * Pure: buildReport takes the run, the inputs as label/value rows (the results layer fills them), the charts
  * as SVG strings, and returns the page as a string. All user text is escaped.
  */
+import { screeningCaution } from '../../core/cautions.js';
 import type { FlowResult, FreeboardRow, ReachResult, RunResult, StationResult, StructureResult } from '../../results/types.js';
 import { accuracyGoal } from '../../core/tolerances.js';
 import { escapeHtml as h, checkedSvg } from './escape.js';
@@ -68,8 +69,7 @@ export interface ReportInput {
 }
 
 /** The caution every report carries, whatever the run adds. */
-export const standardCaution =
-  'These results are a screening aid. Channels, culverts, weirs, spillways and other works that protect people or property must be designed and checked by a licensed engineer under local codes and agency criteria.';
+export const standardCaution = screeningCaution;
 
 const methodWords: Record<string, string> = {
   'standard-step':

@@ -13,6 +13,7 @@
  *      or find the control drowned
  *   6. tabulate the stations
  */
+import { screeningCaution } from '../../core/cautions.js';
 import { InputError, NumericalError, type Problem } from '../../core/errors.js';
 import { brentRoot } from '../../core/roots.js';
 import type { JumpType } from '../../results/types.js';
@@ -38,7 +39,7 @@ import type {
 } from './types.js';
 
 export const spatiallyVariedCautions: readonly string[] = [
-  'Screening aid only: side-channel spillways, collector channels and other works that protect people or property must be designed and checked by a licensed engineer under local codes and agency criteria.',
+  screeningCaution,
   'The one-dimensional momentum equation assumes the inflow enters with no velocity component along the channel and that the flow stays gradually varied; strong transverse inflow, air entrainment and surface waves are not modelled.',
 ];
 
