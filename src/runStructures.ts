@@ -28,7 +28,11 @@ export function computeModelFlow(
 ): FlowComputation {
   const structured = input as StructuredFlowInput;
   const units = unitsOf(model.units);
-  if (!hasSurvey && needsStructuredRun(structured)) return { input, result: computeStructuredFlow(structured, units) };
+  if (!hasSurvey && needsStructuredRun(structured)) {
+    const result = computeStructuredFlow(structured, units);
+    // the discharge found from a reservoir replaces the placeholder (a method comparison then runs at it)
+    return { input: { ...input, discharge: result.discharge }, result };
+  }
   if (hasSurvey && (structured.reservoir || structured.lateralInflow || structured.dischargeChanges)) {
     const where = structured.reservoir ? 'boundaries.upstream' : structured.lateralInflow ? 'lateralInflow' : 'flowChanges';
     throw new InputError({ where, message: 'reservoirs, flow changes and lateral inflow are computed on channels of prismatic reaches only (not yet with surveyed reaches)' });
