@@ -13,6 +13,12 @@
  * (culvert/outletControl.ts: BarrelProfileInputs → BarrelProfileResult), injected so structures need not
  * import the engine. freeOverfall() takes the critical depth the engine already has. toStructureResult()
  * turns an outcome into the results layer's StructureResult (caution kept as the last note).
+ *
+ * controls/ builds the engine's InternalControl objects from model structures on top of these functions
+ * (structureControl), injects the engine's barrel profile into culvert(), places the jump below gates and
+ * spillways after the run, and runs one flow with a rating curve, a reservoir or an end overfall
+ * (computeStructuredFlow). It is exported from controls/index.ts, not from here, so this index stays free of
+ * the engine.
  */
 export * from './types.js';
 export * from './cautions.js';
