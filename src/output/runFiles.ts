@@ -13,7 +13,7 @@
  * Deterministic: the same run gives the same bytes in result.json, stations.csv and every chart file
  * (no clock, no random names); the report carries the program version, not a time.
  */
-import { readFile, rm } from 'node:fs/promises';
+import { readFile, readdir, rm } from 'node:fs/promises';
 import { join, normalize } from 'node:path';
 import type { ModelRun } from '../run.js';
 import { assembleReport, type PlannedChart, type ReportOptions } from './assembleReport.js';
@@ -71,7 +71,10 @@ export async function runFiles(run: ModelRun, options: RunFilesOptions = {}): Pr
     options.onProgress?.(i + 1, total, `chart ${chart.name}`);
   }
   const html = buildReport({ ...report, charts: drawn });
-  files.unshift({ name: 'report.html', content: html }, { name: 'result.json', content: resultJson(run) }, { name: 'stations.csv', content: stationsCsv(run.result) });
+  // report.html goes last: files are renamed into place in this order, so the page a reader opens is the
+  // last to change (it holds its charts inline and never depends on the chart files)
+  files.unshift({ name: 'result.json', content: resultJson(run) }, { name: 'stations.csv', content: stationsCsv(run.result) });
+  files.push({ name: 'report.html', content: html });
   options.onProgress?.(total, total, 'report');
   return { files, charts: charts.map((c) => c.name), notes };
 }
@@ -91,6 +94,19 @@ function removable(name: string): boolean {
   return !clean.startsWith('..') && !clean.startsWith('/') && !clean.includes('\0') && /^(report\.html|result\.json|stations\.csv|charts\/[A-Za-z0-9._-]+\.(vl\.json|svg|png))$/.test(clean);
 }
 
+/** Temporary files an interrupted earlier run left behind (the ".gvf-tmp-" prefix is reserved for them). */
+async function removeLeftovers(dir: string): Promise<void> {
+  for (const sub of ['', 'charts']) {
+    let names: string[];
+    try {
+      names = await readdir(join(dir, sub));
+    } catch {
+      continue;
+    }
+    for (const name of names) if (name.startsWith('.gvf-tmp-')) await rm(join(dir, sub, name), { force: true });
+  }
+}
+
 export interface WrittenRun {
   /** full paths of the files written */
   written: string[];
@@ -107,6 +123,7 @@ export async function writeRunOutputs(dir: string, run: ModelRun, options: RunFi
   const built = await runFiles(run, options);
   const names = built.files.map((f) => f.name);
   const old = await previousManifest(dir);
+  await removeLeftovers(dir);
   const written = await writeOutputs(dir, [...built.files, { name: manifestName, content: `${names.join('\n')}\n` }]);
   const keep = new Set(names.map((n) => normalize(n)));
   const removed: string[] = [];

@@ -76,6 +76,16 @@ describe('writeRunOutputs(dir, run)', () => {
     expect(readdirSync(dir).some((n) => n.startsWith('.gvf-tmp-'))).toBe(false);
   });
 
+  it('writeRunOutputs(dir, run) clears temporary files an interrupted run left behind', async () => {
+    const dir = scratch();
+    await writeRunOutputs(dir, run);
+    writeFileSync(join(dir, '.gvf-tmp-999-dead-0'), 'half');
+    writeFileSync(join(dir, 'charts', '.gvf-tmp-999-dead-3'), 'half');
+    await writeRunOutputs(dir, run);
+    expect(readdirSync(dir).filter((n) => n.startsWith('.gvf-tmp-'))).toEqual([]);
+    expect(readdirSync(join(dir, 'charts')).filter((n) => n.startsWith('.gvf-tmp-'))).toEqual([]);
+  });
+
   it('writeRunOutputs(dir, run) that fails while drawing a chart leaves the previous files byte for byte', async () => {
     const dir = scratch();
     await writeRunOutputs(dir, run);
