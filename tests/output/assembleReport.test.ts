@@ -120,3 +120,20 @@ describe('slug(text), stationText(x)', () => {
     expect(stationSlug(-20)).toBe('minus-20');
   });
 });
+
+describe('buildReport(assembleReport(run)) with a flow change', () => {
+  it('buildReport(...) shows each row of a reach split where its discharge changes with its own profile types and the local discharge', async () => {
+    const { buildReport } = await import('../../src/output/report/html.js');
+    const run = chuteRun({ flowChanges: [{ id: 'invented side inlet', station: 240, addedDischarge: 2 }] });
+    const flow = run.result.flows[0]!;
+    const rows = flow.reaches.filter((r) => r.id === 'channel');
+    expect(rows.length).toBe(2);
+    const { report, charts } = assembleReport(run);
+    const html = buildReport({ ...report, charts: [] });
+    for (const r of rows) for (const p of r.profiles) expect(html).toContain(`<b>${p.type}</b> ${p.from.toFixed(1)}–${p.to.toFixed(1)} m`);
+    // the rating curve at the downstream end carries the discharge there (2 m³/s more than upstream)
+    const rating = datasets(charts.find((c) => c.name === 'rating')!.spec).rating!;
+    const downstream = rating.filter((p) => String(p.series).startsWith('Downstream end')).map((p) => p.discharge);
+    expect(downstream).toEqual(run.result.flows.map((f) => f.discharge + 2));
+  });
+});
