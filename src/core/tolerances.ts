@@ -79,6 +79,9 @@ export const odeReferenceRelativeTolerance = 1e-11;
 export const alphaDerivativeStep = 1e-6;
 /** Profile: a jump toe is located to this fraction of the channel length (Brent on the specific-force difference). */
 export const jumpToeTolerance = 1e-9;
+/** Profile: the jump toe is searched on each side's profile integrated once through this many equal parts of the
+ *  output interval that holds it, joined by cubic Hermite interpolation (a function continuous in x). */
+export const jumpToeSubdivisions = 32;
 
 /** Hydraulics: Colebrook–White is solved for x = 1/√f within these bounds (f from 10⁶ down to 2.5·10⁻⁵).
  *  Where the roughness is as large as the flow (ks/(14.8R) near or above 1) the equation has no root in

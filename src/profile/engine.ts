@@ -13,7 +13,7 @@
  *   5. assemble   stations with their elements, profile types by zone, jumps, controls, warnings
  */
 import { InputError, NumericalError, type Problem } from '../core/errors.js';
-import { accuracyFor, jumpToeTolerance } from '../core/tolerances.js';
+import { accuracyFor, jumpToeSubdivisions, jumpToeTolerance } from '../core/tolerances.js';
 import { flowState } from '../hydraulics/state.js';
 import type { HydraulicSection } from '../hydraulics/hydraulicSection.js';
 import type {
@@ -347,11 +347,71 @@ function integratePiece(ctx: Context, piece: Piece, stations: number[], startDep
   return { depths: result.depths, steps: result.steps, stop: { station: piece.stations[j]!, depth: piece.criticals![j]!, reason: 'critical' } };
 }
 
-/** The depth at station x, integrating from (x0, y0) over one short stretch; critical depth where the profile stops first. */
-function depthAt(ctx: Context, piece: Piece, x0: number, y0: number, x: number, regime: FlowRegime): number {
-  if (x === x0) return y0;
-  const result = run(ctx, stretchSpec(ctx, piece, [x0, x], y0, regime));
-  return result.depths.length === 2 ? result.depths[1]! : criticalAt(piece, x);
+/** A profile over one output interval as a function continuous in x (for the jump toe search). */
+interface Curve {
+  /** the depth at x between the interval's ends */
+  at(x: number): number;
+  /** where the profile ran into critical depth (or a crown) inside the interval; beyond it the depth stays there */
+  readonly stop?: number;
+}
+
+function hermite(t: number, y0: number, y1: number, m0: number, m1: number, h: number): number {
+  const t2 = t * t;
+  const t3 = t2 * t;
+  return (2 * t3 - 3 * t2 + 1) * y0 + (t3 - 2 * t2 + t) * h * m0 + (-2 * t3 + 3 * t2) * y1 + (t3 - t2) * h * m1;
+}
+
+/**
+ * The profile from (x0, y0) towards x1 as one integration through jumpToeSubdivisions equal sub-intervals, joined by
+ * cubic Hermite interpolation with dy/dx from the equation (linear where dy/dx is steep near critical depth), and
+ * by y − yc ∝ √(distance) into a critical stop (the form of the profile next to its singular point, Henderson 1966 §4.3).
+ * One integration gives a continuous function of x: re-integrating a short stretch for each trial x would not (an
+ * adaptive integrator's steps, and so its round-off and truncation errors, change with the end point), and the
+ * root finder on the specific-force difference could settle on such a discontinuity instead of the balance.
+ */
+function profileCurve(ctx: Context, piece: Piece, x0: number, y0: number, x1: number, regime: FlowRegime): Curve {
+  const n = jumpToeSubdivisions;
+  const xs = Array.from({ length: n + 1 }, (_, k) => (k === n ? x1 : x0 + ((x1 - x0) * k) / n));
+  const result = run(ctx, stretchSpec(ctx, piece, xs, y0, regime));
+  const ys = result.depths;
+  const m = ys.length;
+  const q = piece.discharge;
+  const gradients = ys.map((y) => {
+    const st = pointState(piece.section, y, q);
+    return (piece.slope - st.frictionSlope) / st.dEdy;
+  });
+  const stop = result.stop;
+  const span = x1 - x0;
+  const at = (x: number): number => {
+    const t = (x - x0) / span;
+    if (!(t > 0)) return ys[0]!;
+    const k = Math.min(n - 1, Math.floor(t * n));
+    if (k + 1 < m) {
+      const xa = xs[k]!;
+      const h = xs[k + 1]! - xa;
+      const ya = ys[k]!;
+      const yb = ys[k + 1]!;
+      const dy = Math.abs(yb - ya);
+      const ga = gradients[k]!;
+      const gb = gradients[k + 1]!;
+      const u = Math.min(1, Math.max(0, (x - xa) / h));
+      const smooth = Number.isFinite(ga) && Number.isFinite(gb) && Math.abs(ga * h) <= 3 * dy && Math.abs(gb * h) <= 3 * dy;
+      if (!smooth) return ya + u * (yb - ya);
+      // a profile on a prismatic reach is monotone (dy/dx keeps its sign within a zone): no overshoot past either end
+      return Math.min(Math.max(hermite(u, ya, yb, ga, gb, h), Math.min(ya, yb)), Math.max(ya, yb));
+    }
+    const yl = ys[m - 1]!;
+    if (!stop) return yl;
+    const xl = xs[m - 1]!;
+    const remaining = (stop.station - x) / (stop.station - xl);
+    if (!(remaining > 0)) return stop.depth;
+    if (!(remaining < 1)) return yl;
+    return stop.depth + (yl - stop.depth) * (stop.reason === 'critical' ? Math.sqrt(remaining) : remaining);
+  };
+  // a stop at a crown may report its depth a rounding unit above it
+  const top = piece.section.section.maxDepth;
+  const inside = (x: number) => Math.min(at(x), top);
+  return stop ? { at: inside, stop: stop.station } : { at: inside };
 }
 
 function force(hs: HydraulicSection, depth: number, discharge: number): number {
@@ -482,6 +542,10 @@ export function computeProfile(input: ProfileInput, options: EngineOptions = {})
   const final: Entry[][] = pieces.map(() => []);
   let regime: 'sub' | 'super' = 'sub';
   let carry = NaN;
+  /** the supercritical flow leaving the piece above runs under a subcritical profile that refused it a jump */
+  let blockedAbove = false;
+  /** where a subcritical profile first refused a jump (reported once) */
+  let refusal: { station: number; depth: number; critical: number } | undefined;
   for (let p = 0; p <= last; p++) {
     const piece = pieces[p]!;
     const subs = sub[p]!;
@@ -541,13 +605,76 @@ export function computeProfile(input: ProfileInput, options: EngineOptions = {})
       const hsi = sectionAt(piece, stations[i]!);
       return force(hsi, s, q) > force(hsi, sup[i]!, q) * (1 + 1e-9);
     };
+    interface Toe {
+      readonly toe: number;
+      readonly y1: number;
+      readonly y2: number;
+      readonly hs: HydraulicSection;
+    }
+    /**
+     * The jump in (stations[i−1], stations[i]], where the subcritical profile has overtaken the supercritical one in
+     * specific force; null where the subcritical profile begins inside the interval (computed upstream, it runs
+     * into critical depth there) already with more force than the supercritical flow: no depth on it is sequent
+     * to the supercritical depth, so no jump forms there (with α > 1 the least specific force lies below critical
+     * depth, and a supercritical depth can have a sequent depth below critical).
+     */
+    const toeIn = (i: number): Toe | null => {
+      const xa = stations[i - 1]!;
+      const xb = stations[i]!;
+      const ya = sup[i - 1]!;
+      const yb = subs[i]!;
+      const before = subs[i - 1] ?? null;
+      if (piece.nodes) {
+        // between surveyed sections: where the linearly interpolated specific-force difference vanishes
+        const hsA = sectionAt(piece, xa);
+        const da = force(hsA, ya, q) - force(hsA, before ?? criticalAt(piece, xa), q);
+        if (before === null && !(da > 0)) {
+          refusal ??= { station: xa, depth: ya, critical: criticalAt(piece, xa) };
+          return null;
+        }
+        const supB = i < sup.length ? sup[i]! : criticalAt(piece, xb);
+        const db = force(sectionAt(piece, xb), supB, q) - force(sectionAt(piece, xb), yb, q);
+        const t = da > 0 && db <= 0 ? da / (da - db) : 1;
+        const toe = xa + t * (xb - xa);
+        const subA = before ?? criticalAt(piece, xa);
+        return { toe, hs: sectionAt(piece, toe), y1: ya + t * (supB - ya), y2: subA + t * (yb - subA) };
+      }
+      const hs = piece.section;
+      const supCurve = profileCurve(ctx, piece, xa, ya, xb, 'supercritical');
+      const subCurve = profileCurve(ctx, piece, xb, yb, xa, 'subcritical');
+      const difference = (x: number) => force(hs, supCurve.at(x), q) - force(hs, subCurve.at(x), q);
+      const start = before === null && subCurve.stop !== undefined ? subCurve.stop : xa;
+      if (before === null && !(difference(start) > 0)) {
+        refusal ??= { station: start, depth: supCurve.at(start), critical: subCurve.at(start) };
+        return null;
+      }
+      const toe = locateToe(difference, start, xb, jumpToeTolerance * ctx.totalLength);
+      return { toe, hs, y1: supCurve.at(toe), y2: subCurve.at(toe) };
+    };
+    // Search downstream for the first such interval. Under a subcritical profile that refused a jump the flow stays
+    // supercritical until its own specific force is the larger again (a jump needs the supercritical flow to have
+    // the larger force just upstream of the toe), so `blocked` skips the stations where the subcritical one wins.
+    let blocked: boolean = p > 0 && regime === 'super' && !pieces[p - 1]!.control && blockedAbove;
     let i0 = -1;
+    let found: Toe | null = null;
     for (let i = 0; i < stations.length; i++) {
-      if (wins(i)) {
+      if (!wins(i)) {
+        if (blocked && i < sup.length && subs[i] !== null && subs[i] !== undefined) blocked = false;
+        continue;
+      }
+      if (blocked) continue;
+      if (i === 0 || i > sup.length) {
         i0 = i;
         break;
       }
+      found = toeIn(i);
+      if (found) {
+        i0 = i;
+        break;
+      }
+      blocked = true;
     }
+    blockedAbove = false;
     if (i0 === -1) {
       // supercritical throughout this piece
       for (let i = 0; i < stations.length; i++) {
@@ -561,13 +688,17 @@ export function computeProfile(input: ProfileInput, options: EngineOptions = {})
           reason: result.stop.reason,
           direction: 'downstream',
           resolved: false,
-          message:
-            `The supercritical profile from station ${show(stations[0]!)} runs into critical depth at station ${show(result.stop.station)} and no subcritical profile ` +
-            'is there to jump to: a downstream control is needed; depths below it are set to critical depth.',
+          message: blocked
+            ? `The supercritical profile from station ${show(stations[0]!)} runs into critical depth at station ${show(result.stop.station)} under the subcritical ` +
+              'profile from downstream, which has the larger specific force there but no depth sequent to it: no jump joins them; ' +
+              'a control is needed; depths below it are set to critical depth.'
+            : `The supercritical profile from station ${show(stations[0]!)} runs into critical depth at station ${show(result.stop.station)} and no subcritical profile ` +
+              'is there to jump to: a downstream control is needed; depths below it are set to critical depth.',
         });
       }
       regime = 'super';
       carry = sup.length === stations.length ? sup[sup.length - 1]! : yc;
+      blockedAbove = blocked;
       continue;
     }
     if (i0 > sup.length) {
@@ -632,31 +763,7 @@ export function computeProfile(input: ProfileInput, options: EngineOptions = {})
       continue;
     }
     // the toe lies in (stations[i0−1], stations[i0]]
-    const xa = stations[i0 - 1]!;
-    const xb = stations[i0]!;
-    const ya = sup[i0 - 1]!;
-    const yb = subs[i0]!;
-    let toe: number;
-    let y1: number;
-    let y2: number;
-    let hs: HydraulicSection;
-    if (piece.nodes) {
-      // between surveyed sections: where the linearly interpolated specific-force difference vanishes
-      const da = force(sectionAt(piece, xa), ya, q) - force(sectionAt(piece, xa), subs[i0 - 1] ?? criticalAt(piece, xa), q);
-      const db = force(sectionAt(piece, xb), i0 < sup.length ? sup[i0]! : criticalAt(piece, xb), q) - force(sectionAt(piece, xb), yb, q);
-      const t = da > 0 && db <= 0 ? da / (da - db) : 1;
-      toe = xa + t * (xb - xa);
-      hs = sectionAt(piece, toe);
-      y1 = ya + t * ((i0 < sup.length ? sup[i0]! : criticalAt(piece, xb)) - ya);
-      y2 = (subs[i0 - 1] ?? criticalAt(piece, xa)) + t * (yb - (subs[i0 - 1] ?? criticalAt(piece, xa)));
-    } else {
-      hs = piece.section;
-      const difference = (x: number) =>
-        force(hs, depthAt(ctx, piece, xa, ya, x, 'supercritical'), q) - force(hs, depthAt(ctx, piece, xb, yb, x, 'subcritical'), q);
-      toe = locateToe(difference, xa, xb, jumpToeTolerance * ctx.totalLength);
-      y1 = depthAt(ctx, piece, xa, ya, toe, 'supercritical');
-      y2 = depthAt(ctx, piece, xb, yb, toe, 'subcritical');
-    }
+    const { toe, y1, y2, hs } = found!;
     jumps.push(jumpAt(hs, hs, q, toe, y1, y2));
     for (let i = 0; i < i0; i++) final[p]!.push({ station: stations[i]!, depth: sup[i]!, piece: p });
     final[p]!.push({ station: toe, depth: y1, piece: p }, { station: toe, depth: y2, piece: p });
@@ -666,8 +773,31 @@ export function computeProfile(input: ProfileInput, options: EngineOptions = {})
     }
     regime = 'sub';
   }
+  if (refusal) {
+    const r = refusal;
+    const end = pieces[last]!.to;
+    const jump = jumps.find((j) => j.station > r.station);
+    const stop = stops.find((st) => st.direction === 'downstream' && !st.resolved && st.station > r.station);
+    const then = jump
+      ? `; it jumps at station ${show(jump.station)}, where its specific force has become the larger`
+      : stop
+        ? `; it runs into critical depth at station ${show(stop.station)} (see the warning on that station)`
+        : regime === 'super'
+          ? `; it leaves the channel supercritical at station ${show(end)}`
+          : '';
+    warnings.push(
+      `At station ${show(r.station)} the subcritical profile from downstream begins at critical depth ${show(r.critical)} (computed upstream, it runs into critical depth there) ` +
+        `with more specific force than the supercritical flow arriving at depth ${show(r.depth)}: no depth on it is sequent to the supercritical depth, ` +
+        `so no jump forms there and the flow stays supercritical${then}.`,
+    );
+  }
   // a sweep that ends supercritical while a tailwater was given: the jump is swept out
-  if (regime === 'super' && downstreamHeld) {
+  if (regime === 'super' && downstreamHeld && blockedAbove) {
+    warnings.push(
+      `The flow reaches the downstream end (station ${show(pieces[last]!.to)}) supercritical under the subcritical profile of the tailwater, which has the larger ` +
+        'specific force but no depth sequent to the supercritical flow: no jump joins them in the channel; a control is needed.',
+    );
+  } else if (regime === 'super' && downstreamHeld) {
     warnings.push(
       `The tailwater at the downstream end (station ${show(pieces[last]!.to)}) is too low to hold a jump in the channel: the jump is swept out ` +
         'and the flow leaves supercritical.',

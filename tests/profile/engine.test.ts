@@ -10,7 +10,10 @@ import { computeProfile } from '../../src/profile/engine.js';
 import type { ProfileType } from '../../src/results/types.js';
 import type { ProfileInput } from '../../src/profile/types.js';
 import { accuracyFor } from '../../src/core/tolerances.js';
-import { SI } from '../../src/core/units.js';
+import { SI, US } from '../../src/core/units.js';
+import { specificForce } from '../../src/hydraulics/specificForce.js';
+import type { HydraulicSection } from '../../src/hydraulics/hydraulicSection.js';
+import type { FlowResult } from '../../src/results/types.js';
 import { points } from '../../src/geometry/shapes/points.js';
 import { conveyanceAndAlpha, hydraulicSection } from '../../src/hydraulics/hydraulicSection.js';
 import { channel, rect5, rect5Discharge } from './channels.js';
@@ -155,5 +158,109 @@ describe('computeProfile: resolution and friction averaging', () => {
       const c = compareMethods({ ...cases[0]!.input, frictionAveraging });
       expect(c.withinGoal, frictionAveraging).toBe(true);
     }
+  });
+});
+
+describe('computeProfile: jumps on compound points sections (regressions found by the property tests)', () => {
+  // Invented US sections drawn by the property tests (rounded here): wide flat floodplains either side of a V main
+  // channel, three roughness zones, α from the subsection conveyances (Chow 1959 §6-4, published method).
+  const wideV = hydraulicSection(
+    points({
+      points: [
+        [0, 6.855], [0, 2.9101], [49.5, 2.85652], [99, 2.80295], [148.5, 2.74939], [198, 2.69582], [247.5, 0.993888], [297, 0.0000145],
+        [346.5, 0.993888], [396, 2.69582], [445.5, 2.74939], [495, 2.80295], [544.5, 2.85652], [594, 2.9101], [594, 6.855],
+      ],
+      roughness: [[0, 0.01], [240, 0.0100001], [354, 0.008]],
+    }),
+    'manning',
+    US,
+  );
+  const flatV = hydraulicSection(
+    points({
+      points: [
+        // 0.0128 ft steps down to a flat 11 ft bottom and up again (kept at full precision: the case is sensitive)
+        [0, 14.76857186961594], [0, 7.120645898526256], [11.184560253858129, 7.107840775800913],
+        [22.369120507716257, 7.095035653075569], [33.55368076157439, 7.082230530350226], [44.738241015432514, 7.069425407624883],
+        [55.922801269290645, 7.05662028489954], [67.10736152314878, 7.043815162174196], [78.2919217770069, 7.031010039448853],
+        [89.47648203086503, 7.01820491672351], [100.66104228472317, 7.005399793998167], [111.84560253858129, 6.9925946712728235],
+        [123.03016279243943, 6.979789548547481], [134.21472304629756, 6.966984425822138],
+        [145.39928330015567, 6.954179303096795], [156.5838435540138, 6.941374180371451], [167.76840380787192, 6.928569057646108],
+        [178.95296406173006, 6.915763934920765], [190.1375243155882, 6.902958812195422], [201.32208456944633, 6.902958812195422],
+        [212.50664482330447, 6.915763934920765], [223.69120507716258, 6.928569057646108],
+        [234.87576533102074, 6.941374180371452], [246.06032558487885, 6.954179303096795], [257.244885838737, 6.966984425822138],
+        [268.42944609259513, 6.9797895485474815], [279.61400634645327, 6.992594671272824],
+        [290.79856660031135, 7.005399793998167], [301.9831268541695, 7.01820491672351], [313.1676871080276, 7.031010039448853],
+        [324.35224736188576, 7.043815162174197], [335.53680761574384, 7.05662028489954], [346.72136786960203, 7.069425407624883],
+        [357.9059281234601, 7.082230530350226], [369.09048837731825, 7.09503565307557], [380.2750486311764, 7.107840775800913],
+        [391.4596088850345, 7.120645898526256], [391.4596088850345, 14.76857186961594],
+      ],
+      roughness: [[0, 0.12704835580499058], [191.20277849007553, 0.05136723290851176], [200.25683039495897, 0.10163868464399246]],
+    }),
+    'manning',
+    US,
+  );
+  const balanced = (hs: HydraulicSection, discharge: number, result: FlowResult, label: string) => {
+    for (const j of result.jumps) {
+      const m1 = specificForce(hs, j.upstreamDepth, discharge);
+      const m2 = specificForce(hs, j.downstreamDepth, discharge);
+      // the momentum balance that defines sequent depths (Bélanger; Chow 1959 §3-9 and §15-1, published), to the
+      // property tests' bound (the toe is located to 1e-9 of the channel length)
+      expect(Math.abs(m1 - m2), `${label}: jump at ${j.station}, y1 ${j.upstreamDepth}, y2 ${j.downstreamDepth}`).toBeLessThanOrEqual(1e-5 * Math.max(m1, m2));
+      expect(j.upstreamDepth, label).toBeLessThan(j.downstreamDepth);
+    }
+  };
+
+  it('computeProfile: a jump needs a sequent depth on the subcritical profile; where it starts at critical depth with more force, the flow stays supercritical', () => {
+    // steep (S2 from critical depth at the entrance) into mild with a free overfall: the S1 curve computed up from the
+    // break runs into critical depth, and there its specific force M(yc) already exceeds that of the S2 flow (α > 1
+    // puts the least M below yc): no depth on that profile is sequent to the S2 depth
+    const q = 3535.346;
+    for (const method of ['standard-step', 'direct-step', 'ode'] as const) {
+      const result = computeProfile({
+        units: US,
+        reaches: [
+          { id: 'chute', section: wideV, length: 95.8243, slope: 0.003 },
+          { id: 'flat', section: wideV, length: 252.5698, slope: 0.000346182 },
+        ],
+        discharge: q,
+        flowId: 'p',
+        boundaries: { downstream: { type: 'critical' } },
+        method,
+      });
+      const yc = result.reaches[0]!.criticalDepth;
+      for (const j of result.jumps) expect(Math.abs(j.downstreamDepth - yc), `${method}: jump onto critical depth at ${j.station}`).toBeGreaterThan(1e-6 * yc);
+      balanced(wideV, q, result, method);
+      expect(result.jumps, method).toHaveLength(0);
+      expect(result.warnings.some((w) => /no jump forms there and the flow stays supercritical; it leaves the channel supercritical/.test(w)), method).toBe(true);
+      // supercritical to the end: below critical depth at every station (Chow 1959 §9-2: S2 then M3, published classification)
+      expect(result.reaches.flatMap((r) => r.profiles.map((p) => p.type)), method).toEqual(['S2', 'M3']);
+      for (const s of result.stations) expect(s.depth, `${method} at ${s.station}`).toBeLessThanOrEqual(yc);
+    }
+  });
+
+  it('computeProfile(ode): the H3 toe search balances specific force like the other methods (one continuous integration, not re-integrations)', () => {
+    // Each trial toe used to re-integrate a short stretch; odex could end such a stretch a rounding unit short of its
+    // end, the depth there was then read as critical depth, and Brent settled on that discontinuity (3 % apart in M).
+    const q = 842.6117398942059;
+    const input: ProfileInput = {
+      units: US,
+      reaches: [
+        { id: 'apron', section: flatV, length: 67.18692444706826, slope: 0 },
+        { id: 'channel', section: flatV, length: 152.5518464488088, slope: 0.00010000000000000024 },
+      ],
+      discharge: q,
+      flowId: 'p',
+      boundaries: { upstream: { type: 'depth', depth: 0.13622340964373825 }, downstream: { type: 'critical' } },
+      method: 'ode',
+    };
+    const toes: number[] = [];
+    for (const method of ['standard-step', 'direct-step', 'ode'] as const) {
+      const result = computeProfile({ ...input, method });
+      expect(result.jumps, method).toHaveLength(1);
+      balanced(flatV, q, result, method);
+      toes.push(result.jumps[0]!.station);
+    }
+    // the three toes agree (the profiles agree within the accuracy goal; the toe moves fast with the shallow y1)
+    expect(Math.max(...toes) - Math.min(...toes)).toBeLessThan(0.01);
   });
 });

@@ -93,12 +93,6 @@ function problemsOf(c: ChannelCase, result: FlowResult): string[] {
   for (const jump of result.jumps) {
     if (jump.atControl) continue; // held at a control or a channel end: no free momentum balance there
     const hs = reaches[0]!.section; // every reach of these channels has the same section
-    const yc = result.reaches[0]!.criticalDepth; // the same section and discharge: one critical depth
-    // Known engine failures, left out here until fixed (each reproduced in the issue 7 report):
-    // a "jump" onto a subcritical profile that has stopped at critical depth (y2 = yc: no depth has the
-    // supercritical side's force), and the ODE method's toe search, whose short re-integrations are not
-    // continuous in x and leave the two sides' forces a few per cent apart at shallow supercritical depths.
-    if (Math.abs(jump.downstreamDepth - yc) <= 1e-9 * yc || c.input.method === 'ode') continue;
     const m1 = specificForce(hs, jump.upstreamDepth, c.input.discharge);
     const m2 = specificForce(hs, jump.downstreamDepth, c.input.discharge);
     // the toe is located to 1e-9 of the channel length, where M changes fast (a steep S2/H3 near its start): 1e-5 relative
