@@ -72,12 +72,23 @@ const levelMatch = 1e-6;
 /** Characters of a chart title that fit across the profile chart at the title font. */
 const profileTitleLimit = 72;
 
-/** "Job title: longitudinal profile", or the job title alone when both would not fit on the chart. */
-function profileTitle(run: RunResult): string {
+/** "Job title: longitudinal profile"; a title too long for one line is wrapped at spaces (at most three lines). */
+export function profileTitle(run: RunResult): string | string[] {
   const job = run.title?.trim();
   if (!job) return 'Longitudinal profile';
   const both = `${job}: longitudinal profile`;
-  return both.length <= profileTitleLimit ? both : job;
+  if (both.length <= profileTitleLimit) return both;
+  if (job.length <= profileTitleLimit) return job;
+  const lines: string[] = [];
+  let line = '';
+  for (const word of job.split(/\s+/)) {
+    if (line && `${line} ${word}`.length > profileTitleLimit) {
+      lines.push(line);
+      line = word;
+    } else line = line ? `${line} ${word}` : word;
+  }
+  if (line) lines.push(line);
+  return lines.length <= 3 ? lines : [...lines.slice(0, 2), lines.slice(2).join(' ')];
 }
 
 /** A station for words and file names: at most three decimals, no trailing zeros. */

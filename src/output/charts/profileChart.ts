@@ -32,8 +32,8 @@ export interface ProfileChartOptions {
   banks?: boolean;
   /** structures to draw in addition to those in the flows' results (deduplicated by id) */
   structures?: ProfileStructureMark[];
-  /** title above the chart (default: the run's title and "longitudinal profile") */
-  title?: string;
+  /** title above the chart, one line or several (default: the run's title and "longitudinal profile") */
+  title?: string | string[];
   /** draw stations decreasing to the right (for stationing that increases upstream) */
   reverseStations?: boolean;
   /** ranges of water surface drawn as pale bands (e.g. a sensitivity envelope), in the colour of their flow */
@@ -125,6 +125,10 @@ function selectFlows(run: RunResult, ids: string[] | undefined): FlowResult[] {
   }
   return out;
 }
+
+/** The key's left inset and the room each entry needs besides its words (symbol, gaps), CSS px. */
+const legendInset = 40;
+const legendEntryExtra = 40;
 
 /** A jump label's height and width as fractions of the elevation range and the station range (10 px text, 900 px chart). */
 const jumpLabelLine = 0.05;
@@ -302,12 +306,12 @@ export function profileChart(run: RunResult, options: ProfileChartOptions = {}):
   const labelReach = jumpLabelWidth * (xr[1] - xr[0] || 1);
   const placed: { station: number; elevation: number }[] = [];
   const jumpRows = jumps.map((j) => {
-    let elevation = j.labelElevation;
-    for (let tries = 0; tries < jumps.length; tries++) {
-      const clash = placed.some((p) => Math.abs(p.station - j.station) < labelReach && Math.abs(p.elevation - elevation) < lineHeight);
-      if (!clash) break;
-      elevation -= lineHeight;
-    }
+    const clear = (e: number) => !placed.some((p) => Math.abs(p.station - j.station) < labelReach && Math.abs(p.elevation - e) < lineHeight);
+    const inside = (e: number) => e - lineHeight >= yLow && e + lineHeight <= yHigh;
+    // below the toe first, then above it, one line at a time, staying inside the plot
+    const candidates = [j.labelElevation];
+    for (let k = 1; k <= jumps.length; k++) candidates.push(j.labelElevation - k * lineHeight, j.labelElevation + k * lineHeight);
+    const elevation = candidates.find((e) => inside(e) && clear(e)) ?? candidates.find(inside) ?? j.labelElevation;
     placed.push({ station: j.station, elevation });
     return { ...j, series: words.jump, labelElevation: r(elevation) };
   });
@@ -326,11 +330,16 @@ export function profileChart(run: RunResult, options: ProfileChartOptions = {}):
     scale: { domain: [r(yLow), r(yHigh)], nice: false, zero: false },
   } as const;
   const xPlain = { field: 'station', type: 'quantitative' } as const;
+  // Vega lays the key out from estimated text widths (0.8 × font size per character): fewer columns when
+  // long flow names would push the last column past the chart's right edge.
+  const longest = Math.max(0, ...key.series.map((e) => [...e.name].length));
+  const entryWidth = Math.ceil(0.8 * font.legendSize * longest) + legendEntryExtra;
+  const fittedColumns = Math.max(1, Math.min(keyColumns, Math.floor((width - legendInset) / entryWidth)));
   const colour = key.colour(words.legendTitle, {
     orient: 'bottom',
-    columns: keyColumns,
+    columns: fittedColumns,
     direction: 'horizontal',
-    labelLimit: Math.max(120, Math.floor((width - 40) / keyColumns) - 14),
+    labelLimit: Math.floor((width - legendInset) / fittedColumns) - legendEntryExtra,
     // bands and observations add area and point marks; the key keeps drawing every entry as a line
     ...(bandRows.length || observationRows.length ? { symbolType: 'stroke', symbolOpacity: 1 } : {}),
   });
