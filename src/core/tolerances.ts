@@ -100,6 +100,10 @@ export const stopApproachFraction = 1e-9;
 /** Profile: at most this many closing-in steps towards a critical stop. */
 export const stopApproachLimit = 200;
 /** Profile: a standard-step stretch that ends at critical depth is re-run at most this many times, each 16 times tighter. */
+/** Profile: a standard-step stretch whose energy errors grow by more than this factor on the way (|dE/dy| falling towards
+ *  critical depth) is re-run with its tolerance divided by the growth, at most by errorGrowthLimit. */
+export const errorGrowthTrigger = 1.5;
+export const errorGrowthLimit = 256;
 export const stopRefinements = 3;
 /** Profile: the ODE method's step bound per integration leg (odex maxSteps), and its bound on switches between y(x) and x(y). */
 export const odeMaxSteps = 100_000;

@@ -22,6 +22,8 @@ import {
   stopApproachLimit,
   stopRefinements,
   energyStepDepthFraction,
+  errorGrowthLimit,
+  errorGrowthTrigger,
   firstStepFraction,
   nearCriticalBand,
   nearCriticalFloor,
@@ -146,16 +148,26 @@ function localError(x1: number, sf1: number, x2: number, sf2: number, x3: number
   return (h * h * h * Math.abs(second)) / (12 * d);
 }
 
-function march(spec: StretchSpec): StretchProfile {
+/** A march's profile, with how much its energy errors grew on the way (see standardStep). */
+interface March extends StretchProfile {
+  /** the largest |dE/dy| met divided by |dE/dy| at the end (≥ 1) */
+  readonly amplification: number;
+}
+
+function march(spec: StretchSpec): March {
   const uniform = uniformStretch(spec);
-  if (uniform) return uniform;
+  if (uniform) return { ...uniform, amplification: 1 };
   const stations = spec.stations;
   const direction = directionOf(spec);
   const first = stations[0]!;
   const length = Math.abs(stations[stations.length - 1]! - first);
   let state = stateAt(spec, spec.startDepth);
   const depths = [state.depth];
-  if (length === 0) return { depths: stations.map(() => state.depth), steps: 0 };
+  if (length === 0) return { depths: stations.map(() => state.depth), steps: 0, amplification: 1 };
+  let steepest = Math.abs(state.dEdy);
+  // next to critical depth an energy error δE moves the depth by about √(2δE/E''), not δE/|dE/dy|: the floor keeps
+  // the growth to what the linear reading means
+  const amplification = () => Math.max(1, steepest / Math.max(Math.abs(state.dEdy), nearCriticalFloor));
 
   const allowedPerLength = (spec.tolerance * profileAccuracySafety) / length;
   const smallest = length * 1e-12;
@@ -212,7 +224,7 @@ function march(spec: StretchSpec): StretchProfile {
         landing = true;
         continue;
       }
-      return { depths, stop: outcome.stop, steps: steps + 1 };
+      return { depths, stop: outcome.stop, steps: steps + 1, amplification: amplification() };
     }
     const after = outcome.state!;
     if (skips && Math.abs(after.dEdy) < nearCriticalBand) {
@@ -241,6 +253,7 @@ function march(spec: StretchSpec): StretchProfile {
     xPrevious = x;
     x = x2;
     state = after;
+    steepest = Math.max(steepest, Math.abs(after.dEdy));
     landing = false;
     // a step shortened to land on a station does not shrink the next one
     h = Math.max(smallest, (remaining === dx ? Math.max(h, dx) : dx) * factor);
@@ -248,19 +261,34 @@ function march(spec: StretchSpec): StretchProfile {
       throw new NumericalError(`standard step: more than ${profileMaxSteps} steps from station ${first}`);
     }
   }
-  return { depths, steps };
+  return { depths, steps, amplification: amplification() };
 }
 
 /**
- * The standard step with a Richardson check where it matters most: a profile that runs into critical depth
- * carries its errors into a region where they grow (the depth varies like the square root of the distance
- * to the stop), so such a stretch is recomputed at a tolerance 16 times tighter (steps 4 times shorter) and,
- * while the two differ by more than the accuracy share, tightened again (at most stopRefinements times).
+ * The standard step with two checks where its errors grow after they are made.
+ *
+ * - The step control keeps each step's local error in depth within its share of the tolerance, with dE/dy where
+ *   the step is. The error made is one of energy (the method integrates dH/dx = −Sf), and a depth error is that
+ *   energy error divided by dE/dy where it is read: a profile heading towards critical depth (M3, H3, A3, S2 from
+ *   a steep start) carries energy errors made where |dE/dy| was large to where it is small. Such a stretch is run
+ *   again with the tolerance divided by that growth (the largest |dE/dy| met over |dE/dy| at the end, at most
+ *   errorGrowthLimit; not on a critical slope, where the ratio stays finite through critical depth), so the errors
+ *   read at its end stay within the share.
+ * - A profile that runs into critical depth carries its errors into a region where they grow without bound (the
+ *   depth varies like the square root of the distance to the stop), so such a stretch is recomputed at a
+ *   tolerance 16 times tighter (steps 4 times shorter) and, while the two differ by more than the accuracy share,
+ *   tightened again (at most stopRefinements times): a Richardson check.
  */
 export function standardStep(spec: StretchSpec): StretchProfile {
-  let result = march(spec);
-  if (result.stop?.reason !== 'critical' || result.depths.length < 2) return result;
+  let result: March = march(spec);
   let steps = result.steps;
+  // on a critical slope the equation's ratio stays finite through critical depth: no growth to correct
+  if (!spec.criticalSlope && result.stop?.reason !== 'critical' && result.amplification > errorGrowthTrigger && result.depths.length >= 2) {
+    const tighter = march({ ...spec, tolerance: spec.tolerance / Math.min(result.amplification, errorGrowthLimit) });
+    steps += tighter.steps;
+    result = tighter;
+  }
+  if (result.stop?.reason !== 'critical' || result.depths.length < 2) return { depths: result.depths, ...(result.stop ? { stop: result.stop } : {}), steps };
   let tolerance = spec.tolerance;
   for (let k = 0; k < stopRefinements; k++) {
     tolerance /= 16;
@@ -273,5 +301,5 @@ export function standardStep(spec: StretchSpec): StretchProfile {
     result = finer;
     if (settled) break;
   }
-  return { ...result, steps };
+  return { depths: result.depths, ...(result.stop ? { stop: result.stop } : {}), steps };
 }

@@ -17,7 +17,8 @@ import { energyStep, standardStep } from '../../src/profile/standardStep.js';
 import type { StretchSpec } from '../../src/profile/stretch.js';
 import type { FrictionAveraging } from '../../src/profile/types.js';
 import { assertInDelta, assertRelative } from '../helpers/assert.js';
-import { rect5, rect5Discharge } from './channels.js';
+import { rect5, rect5Discharge, wideChannel } from './channels.js';
+import { brentRoot } from '../../src/core/roots.js';
 
 const q = rect5Discharge;
 const yc = criticalDepth(rect5, q);
@@ -107,4 +108,47 @@ describe('standardStep', () => {
     expect(r.warnings.join(' ')).toMatch(/flows full/);
     expect(r.stations.every((s) => Number.isFinite(s.depth) && s.depth > 0 && s.depth <= 1.2)).toBe(true);
   });
+});
+
+describe('standardStep towards critical depth (found by the long property run)', () => {
+  // Bresse's closed form for a wide channel with Chézy friction (Bresse 1860, as given in Chow 1959 §10-5; form from
+  // memory, checked against Bakhmeteff's varied-flow table in ode.test.ts): x = (yn/S0)·{u − (1 − β)·φ(u)} + const,
+  // u = y/yn, β = (yc/yn)³ = C²S0/g; it holds below critical depth too (an M3 profile, u < yc/yn).
+  const C = 50;
+  const S0 = 0.0004;
+  const unitQ = 2;
+  const wide = wideChannel(1, C);
+  const yn = Math.cbrt((unitQ / (C * Math.sqrt(S0))) ** 2);
+  const ycWide = Math.cbrt((unitQ * unitQ) / SI.g);
+  const beta = (C * C * S0) / SI.g;
+  const phi = (u: number) => (1 / 6) * Math.log((u * u + u + 1) / ((u - 1) * (u - 1))) - (1 / Math.sqrt(3)) * Math.atan(Math.sqrt(3) / (2 * u + 1));
+  const bresseX = (y: number) => (yn / S0) * (y / yn - (1 - beta) * phi(y / yn));
+
+  // F² from 2 to 1.1, and from 4 to 1.2: the energy errors made where |dE/dy| = F² − 1 is large are read where it is
+  // small; before the fix the step control missed the accuracy goal by 2.4 and 1.4 times here
+  for (const [f0, f1] of [[2, 1.1], [4, 1.2]] as const) {
+    it(`standardStep: an M3 profile from F² = ${f0} to F² = ${f1} meets the accuracy goal against Bresse`, () => {
+      const y0 = ycWide / Math.cbrt(f0);
+      const y1 = ycWide / Math.cbrt(f1);
+      const length = bresseX(y1) - bresseX(y0);
+      const stations = Array.from({ length: 51 }, (_, i) => (length * i) / 50);
+      const profile = standardStep({
+        hs: wide,
+        slope: S0,
+        discharge: unitQ,
+        stations,
+        startDepth: y0,
+        regime: 'supercritical',
+        criticalDepth: ycWide,
+        normalDepth: yn,
+        averaging: 'conveyance',
+        tolerance: accuracyFor('SI', ycWide),
+      });
+      expect(profile.stop).toBeUndefined();
+      stations.forEach((s, i) => {
+        const exact = brentRoot((y) => bresseX(y) - bresseX(y0) - s, y0, ycWide * (1 - 1e-12), { xTolerance: 1e-13 });
+        assertInDelta(profile.depths[i]!, exact, accuracyFor('SI', exact), `station ${s}`);
+      });
+    });
+  }
 });
