@@ -41,7 +41,7 @@ export function fileOptions(path: string, flags: CommonFlags): { modelFile: stri
 export function runFlags(reader: FlagReader, flags: CommonFlags): { method?: MethodName; outputSpacing?: number } {
   const method = reader.choice('--method', flags.method, Object.keys(MethodName) as MethodName[]);
   const step = reader.number('--step', flags.step, 'positive', false);
-  if (flags.out !== undefined && flags.out.trim() === '') reader.problems.push({ where: '--out', message: 'needs a folder name', value: flags.out });
+  reader.outputFolder('--out', flags.out);
   return { ...(method === undefined ? {} : { method }), ...(step === undefined ? {} : { outputSpacing: step }) };
 }
 

@@ -51,7 +51,7 @@ export async function runCommand(path: string, options: RunOptions, streams: Str
   const step = reader.number('--step', options.step, 'positive', false);
   const sections = stationList(reader, '--sections', options.sections);
   const energyAt = reader.number('--energy-at', options.energyAt, 'any', false);
-  if (options.out !== undefined && options.out.trim() === '') reader.problems.push({ where: '--out', message: 'needs a folder name', value: options.out });
+  reader.outputFolder('--out', options.out);
   const reportFlags = ['sections', 'energyAt', 'energyFlow'] as const;
   for (const key of reportFlags) {
     if (options[key] !== undefined && options.out === undefined) {

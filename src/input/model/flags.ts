@@ -3,6 +3,8 @@
  * with every problem named by its flag (`--n`, `--side-slope`). No schema library here, so `gvf section`
  * starts fast. Flag values arrive as text; a number must be written as one (no units, no percent sign).
  */
+import { statSync } from 'node:fs';
+import { dirname, resolve } from 'node:path';
 import { InputError, type Problem } from '../../core/errors.js';
 import { type UnitSystem, isUnitSystem } from '../../core/units.js';
 import { largestMagnitude, maxOutputStations, slopeLimit } from './limits.js';
@@ -105,6 +107,36 @@ export class FlagReader {
     if ((values as readonly string[]).includes(text)) return text as T;
     this.problems.push({ where: flag, message: msg.expectedOneOf(values, text), value: text });
     return undefined;
+  }
+
+  /**
+   * An output folder from a flag (`--out DIR`): named, and not a file, nor below a file (it is created if missing).
+   * Checked before any computing, so a long run does not end in a failed write.
+   */
+  outputFolder(flag: string, text: string | undefined): void {
+    if (text === undefined) return;
+    if (text.trim() === '') {
+      this.problems.push({ where: flag, message: msg.folderNameNeeded(), value: text });
+      return;
+    }
+    // the path itself, or the nearest part of it that exists, must be a folder
+    let path = resolve(text);
+    for (let guard = 0; guard < 256; guard++) {
+      let found;
+      try {
+        found = statSync(path, { throwIfNoEntry: false });
+      } catch (error) {
+        // a file further up makes every path below it "not a directory": look further up; other errors are the writer's
+        if ((error as NodeJS.ErrnoException).code !== 'ENOTDIR') return;
+      }
+      if (found !== undefined) {
+        if (!found.isDirectory()) this.problems.push({ where: flag, message: msg.outputFolderIsFile(text, path), value: text });
+        return;
+      }
+      const up = dirname(path);
+      if (up === path) return;
+      path = up;
+    }
   }
 
   /** Throw one InputError with everything found so far. */

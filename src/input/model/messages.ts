@@ -207,6 +207,11 @@ export const gateWidthNeeded = (shape: string): string =>
 
 export const flagRequired = (what: string): string => `required: ${what}`;
 
+export const folderNameNeeded = (): string => 'needs a folder name';
+
+export const outputFolderIsFile = (given: string, file: string): string =>
+  `${file} is a file, so ${JSON.stringify(given)} cannot be a folder for the outputs: give a folder (it is created if missing)`;
+
 export const flagNotForShape = (shape: string, allowed: readonly string[]): string =>
   `does not apply to a ${shape} section; a ${shape} section takes ${allowed.join(', ')}`;
 
