@@ -68,13 +68,18 @@ interface Golden {
   flows: GoldenFlow[];
 }
 
-/** A few stations per reach: both ends and the middle (the nearest output station to each). */
+/**
+ * A few stations per reach: both ends and the middle (the nearest output station to each). A jump toe is never
+ * picked: its station moves with the toe search (checked separately, within its own tolerance).
+ */
 function keyStations(flow: FlowResult): GoldenStation[] {
   const picked: GoldenStation[] = [];
+  const toes = new Set(flow.jumps.map((j) => j.station));
+  const candidates = flow.stations.filter((s) => !toes.has(s.station));
   for (const r of flow.reaches) {
     for (const target of [r.from, (r.from + r.to) / 2, r.to]) {
-      let best = flow.stations[0];
-      for (const s of flow.stations) if (best === undefined || Math.abs(s.station - target) < Math.abs(best.station - target)) best = s;
+      let best = candidates[0];
+      for (const s of candidates) if (best === undefined || Math.abs(s.station - target) < Math.abs(best.station - target)) best = s;
       if (best && !picked.some((p) => p.station === best!.station)) picked.push({ station: best.station, depth: best.depth, wsel: best.wsel });
     }
   }

@@ -545,7 +545,8 @@ export function computeProfile(input: ProfileInput, options: EngineOptions = {})
   /** the supercritical flow leaving the piece above runs under a subcritical profile that refused it a jump */
   let blockedAbove = false;
   /** where a subcritical profile first refused a jump (reported once) */
-  let refusal: { station: number; depth: number; critical: number } | undefined;
+  /** jumps held where the subcritical profile begins at critical depth (see toeIn) */
+  const held: { station: number; depth: number; critical: number }[] = [];
   for (let p = 0; p <= last; p++) {
     const piece = pieces[p]!;
     const subs = sub[p]!;
@@ -610,6 +611,8 @@ export function computeProfile(input: ProfileInput, options: EngineOptions = {})
       readonly y1: number;
       readonly y2: number;
       readonly hs: HydraulicSection;
+      /** held where the subcritical profile begins at critical depth, without a free momentum balance */
+      readonly held?: boolean;
     }
     /**
      * The jump in (stations[i−1], stations[i]], where the subcritical profile has overtaken the supercritical one in
@@ -629,8 +632,8 @@ export function computeProfile(input: ProfileInput, options: EngineOptions = {})
         const hsA = sectionAt(piece, xa);
         const da = force(hsA, ya, q) - force(hsA, before ?? criticalAt(piece, xa), q);
         if (before === null && !(da > 0)) {
-          refusal ??= { station: xa, depth: ya, critical: criticalAt(piece, xa) };
-          return null;
+          held.push({ station: xa, depth: ya, critical: criticalAt(piece, xa) });
+          return { toe: xa, hs: hsA, y1: ya, y2: criticalAt(piece, xa), held: true };
         }
         const supB = i < sup.length ? sup[i]! : criticalAt(piece, xb);
         const db = force(sectionAt(piece, xb), supB, q) - force(sectionAt(piece, xb), yb, q);
@@ -645,8 +648,8 @@ export function computeProfile(input: ProfileInput, options: EngineOptions = {})
       const difference = (x: number) => force(hs, supCurve.at(x), q) - force(hs, subCurve.at(x), q);
       const start = before === null && subCurve.stop !== undefined ? subCurve.stop : xa;
       if (before === null && !(difference(start) > 0)) {
-        refusal ??= { station: start, depth: supCurve.at(start), critical: subCurve.at(start) };
-        return null;
+        held.push({ station: start, depth: supCurve.at(start), critical: subCurve.at(start) });
+        return { toe: start, hs, y1: supCurve.at(start), y2: subCurve.at(start), held: true };
       }
       const toe = locateToe(difference, start, xb, jumpToeTolerance * ctx.totalLength);
       return { toe, hs, y1: supCurve.at(toe), y2: subCurve.at(toe) };
@@ -764,7 +767,7 @@ export function computeProfile(input: ProfileInput, options: EngineOptions = {})
     }
     // the toe lies in (stations[i0−1], stations[i0]]
     const { toe, y1, y2, hs } = found!;
-    jumps.push(jumpAt(hs, hs, q, toe, y1, y2));
+    jumps.push(found!.held ? { ...jumpAt(hs, hs, q, toe, y1, y2), atControl: true } : jumpAt(hs, hs, q, toe, y1, y2));
     for (let i = 0; i < i0; i++) final[p]!.push({ station: stations[i]!, depth: sup[i]!, piece: p });
     final[p]!.push({ station: toe, depth: y1, piece: p }, { station: toe, depth: y2, piece: p });
     for (let i = i0; i < stations.length; i++) {
@@ -773,22 +776,12 @@ export function computeProfile(input: ProfileInput, options: EngineOptions = {})
     }
     regime = 'sub';
   }
-  if (refusal) {
-    const r = refusal;
-    const end = pieces[last]!.to;
-    const jump = jumps.find((j) => j.station > r.station);
-    const stop = stops.find((st) => st.direction === 'downstream' && !st.resolved && st.station > r.station);
-    const then = jump
-      ? `; it jumps at station ${show(jump.station)}, where its specific force has become the larger`
-      : stop
-        ? `; it runs into critical depth at station ${show(stop.station)} (see the warning on that station)`
-        : regime === 'super'
-          ? `; it leaves the channel supercritical at station ${show(end)}`
-          : '';
+  for (const r of held) {
     warnings.push(
       `At station ${show(r.station)} the subcritical profile from downstream begins at critical depth ${show(r.critical)} (computed upstream, it runs into critical depth there) ` +
-        `with more specific force than the supercritical flow arriving at depth ${show(r.depth)}: no depth on it is sequent to the supercritical depth, ` +
-        `so no jump forms there and the flow stays supercritical${then}.`,
+        `with more specific force than the supercritical flow arriving at depth ${show(r.depth)} (possible where α varies with depth): ` +
+        'the tailwater would push the jump further upstream, where no subcritical profile exists, so the jump is placed where the subcritical profile begins ' +
+        'and its two depths do not balance in specific force; a closer survey or a check of the section\'s roughness subdivision is advised there.',
     );
   }
   // a sweep that ends supercritical while a tailwater was given: the jump is swept out

@@ -210,10 +210,13 @@ describe('computeProfile: jumps on compound points sections (regressions found b
     }
   };
 
-  it('computeProfile: a jump needs a sequent depth on the subcritical profile; where it starts at critical depth with more force, the flow stays supercritical', () => {
+  it('computeProfile: where the subcritical profile starts at critical depth with more force than the supercritical flow, the jump is held there and says so', () => {
     // steep (S2 from critical depth at the entrance) into mild with a free overfall: the S1 curve computed up from the
     // break runs into critical depth, and there its specific force M(yc) already exceeds that of the S2 flow (α > 1
-    // puts the least M below yc): no depth on that profile is sequent to the S2 depth
+    // puts the least M below yc), so no point of the S1 curve balances the S2 flow. The mild reach is still above
+    // critical depth upstream of its brink (Chow 1959 §9-2: M2 ending at critical depth at a free overfall), so the
+    // flow cannot stay supercritical to the end: the jump is held where the S1 curve begins, and a warning says its
+    // two depths do not balance.
     const q = 3535.346;
     for (const method of ['standard-step', 'direct-step', 'ode'] as const) {
       const result = computeProfile({
@@ -228,13 +231,15 @@ describe('computeProfile: jumps on compound points sections (regressions found b
         method,
       });
       const yc = result.reaches[0]!.criticalDepth;
-      for (const j of result.jumps) expect(Math.abs(j.downstreamDepth - yc), `${method}: jump onto critical depth at ${j.station}`).toBeGreaterThan(1e-6 * yc);
-      balanced(wideV, q, result, method);
-      expect(result.jumps, method).toHaveLength(0);
-      expect(result.warnings.some((w) => /no jump forms there and the flow stays supercritical; it leaves the channel supercritical/.test(w)), method).toBe(true);
-      // supercritical to the end: below critical depth at every station (Chow 1959 §9-2: S2 then M3, published classification)
-      expect(result.reaches.flatMap((r) => r.profiles.map((p) => p.type)), method).toEqual(['S2', 'M3']);
-      for (const s of result.stations) expect(s.depth, `${method} at ${s.station}`).toBeLessThanOrEqual(yc);
+      expect(result.jumps, method).toHaveLength(1);
+      const jump = result.jumps[0]!;
+      expect(jump.atControl, method).toBe(true);
+      expect(jump.upstreamDepth, method).toBeLessThan(jump.downstreamDepth);
+      expect(Math.abs(jump.downstreamDepth - yc), method).toBeLessThanOrEqual(1e-3 * yc);
+      expect(result.warnings.some((w) => /the jump is placed where the subcritical profile begins/.test(w)), method).toBe(true);
+      // subcritical below the jump: the mild reach ends in an M2 drawdown to its brink
+      expect(result.reaches[1]!.profiles.map((p) => p.type), method).toContain('M2');
+      for (const s of result.stations) if (s.station > jump.station) expect(s.depth, `${method} at ${s.station}`).toBeGreaterThanOrEqual(yc * (1 - 1e-3));
     }
   });
 
