@@ -95,14 +95,21 @@ export const colebrookWhiteTolerance = 1e-12;
 export const conveyanceJumpFraction = 1e-6;
 /** Profile: the standard step solves each step's depth to this fraction of the accuracy goal (Brent's x tolerance). */
 export const energyStepDepthFraction = 1e-5;
+/** Profile: the standard step widens the bracket around its guessed depth at most this many times (fourfold each) before
+ *  it searches the whole branch. */
+export const guessExpansions = 4;
+/** Profile: where critical depth is not yet known (a surveyed section), the bracket around a guessed depth reaches down
+ *  to at most this fraction of the guess (it must stay inside the section, above a zero depth). */
+export const lazyBracketFloor = 1 / 16;
 /** Profile: the standard step closes in on a critical stop until it lies within this fraction of the stretch length. */
 export const stopApproachFraction = 1e-9;
 /** Profile: at most this many closing-in steps towards a critical stop. */
 export const stopApproachLimit = 200;
 /** Profile: a standard-step stretch that ends at critical depth is re-run at most this many times, each 16 times tighter. */
 /** Profile: a standard-step stretch whose energy errors grow by more than this factor on the way (|dE/dy| falling towards
- *  critical depth) is re-run with its tolerance divided by the growth, at most by errorGrowthLimit. */
-export const errorGrowthTrigger = 1.5;
+ *  critical depth) is re-run with its tolerance divided by the growth, at most by errorGrowthLimit. The trigger is where the
+ *  growth uses up the margin the method keeps (it aims at profileAccuracySafety of the goal). */
+export const errorGrowthTrigger = 4;
 export const errorGrowthLimit = 256;
 export const stopRefinements = 3;
 /** Profile: the ODE method's step bound per integration leg (odex maxSteps), and its bound on switches between y(x) and x(y). */

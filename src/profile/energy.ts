@@ -39,15 +39,37 @@ function alphaAt(hs: HydraulicSection, y: number, discharge: number): number {
   return conveyanceAndAlpha(hs, y, discharge).alpha;
 }
 
-/** The state at depth y (0 < y ≤ maxDepth; the caller keeps y inside the section). */
-export function pointState(hs: HydraulicSection, y: number, discharge: number): PointState {
-  const e = hs.section.elements(y);
-  const { conveyance, alpha } = conveyanceAndAlpha(hs, y, discharge);
+/**
+ * A state as the integrators use it. dE/dy is worked out on first read: with α varying it costs two more
+ * conveyance evaluations (the numerical dα/dy), and the root finders of the standard step, which evaluate
+ * most states, never read it.
+ */
+class State implements PointState {
+  #dEdy = NaN;
+  constructor(
+    private readonly hs: HydraulicSection,
+    private readonly discharge: number,
+    readonly depth: number,
+    readonly area: number,
+    readonly topWidth: number,
+    readonly conveyance: number,
+    readonly alpha: number,
+    readonly velocityHead: number,
+    readonly energy: number,
+    readonly frictionSlope: number,
+    readonly force: number,
+  ) {}
+  get dEdy(): number {
+    if (Number.isNaN(this.#dEdy)) this.#dEdy = energySlope(this.hs, this.depth, this.discharge, this.area, this.topWidth, this.alpha);
+    return this.#dEdy;
+  }
+}
+
+/** dE/dy = 1 − αQ²T/(gA³) + (Q²/2gA²)·dα/dy at depth y (see the module comment). */
+function energySlope(hs: HydraulicSection, y: number, discharge: number, a: number, topWidth: number, alpha: number): number {
   const g = hs.units.g;
   const q2 = discharge * discharge;
-  const a = e.area;
-  const velocityHead = (alpha * q2) / (2 * g * a * a);
-  let dEdy = 1 - (alpha * q2 * e.topWidth) / (g * a * a * a);
+  let dEdy = 1 - (alpha * q2 * topWidth) / (g * a * a * a);
   if (alphaVaries(hs)) {
     // central difference, kept inside the section
     const h = alphaDerivativeStep * Math.max(y, hs.section.lengthScale);
@@ -56,18 +78,30 @@ export function pointState(hs: HydraulicSection, y: number, discharge: number): 
     const dAlpha = (alphaAt(hs, up, discharge) - alphaAt(hs, down, discharge)) / (up - down);
     dEdy += (q2 / (2 * g * a * a)) * dAlpha;
   }
-  return {
-    depth: y,
-    area: a,
-    topWidth: e.topWidth,
+  return dEdy;
+}
+
+/** The state at depth y (0 < y ≤ maxDepth; the caller keeps y inside the section). */
+export function pointState(hs: HydraulicSection, y: number, discharge: number): PointState {
+  const e = hs.section.elements(y);
+  const { conveyance, alpha } = conveyanceAndAlpha(hs, y, discharge);
+  const g = hs.units.g;
+  const q2 = discharge * discharge;
+  const a = e.area;
+  const velocityHead = (alpha * q2) / (2 * g * a * a);
+  return new State(
+    hs,
+    discharge,
+    y,
+    a,
+    e.topWidth,
     conveyance,
     alpha,
     velocityHead,
-    energy: y + velocityHead,
-    frictionSlope: conveyance > 0 ? q2 / (conveyance * conveyance) : Infinity,
-    force: q2 / (g * a) + e.firstMoment,
-    dEdy,
-  };
+    y + velocityHead,
+    conveyance > 0 ? q2 / (conveyance * conveyance) : Infinity,
+    q2 / (g * a) + e.firstMoment,
+  );
 }
 
 /** dy/dx of the gradually varied flow equation at a state, with dE/dy floored in magnitude (keeps it finite). */

@@ -13,7 +13,7 @@
  *   5. assemble   stations with their elements, profile types by zone, jumps, controls, warnings
  */
 import { InputError, NumericalError, type Problem } from '../core/errors.js';
-import { accuracyFor, jumpToeSubdivisions, jumpToeTolerance } from '../core/tolerances.js';
+import { accuracyFor, jumpToeSubdivisions, jumpToeTolerance, nearCriticalBand } from '../core/tolerances.js';
 import { flowState } from '../hydraulics/state.js';
 import type { HydraulicSection } from '../hydraulics/hydraulicSection.js';
 import type {
@@ -53,9 +53,10 @@ interface Piece {
   readonly slope: number;
   /** bed elevation at `to` */
   readonly bedAtEnd: number;
-  /** surveyed reaches: the nodes (one per station) and their critical depths */
+  /** surveyed reaches: the nodes (one per station) */
   readonly nodes?: readonly SurveyNode[];
-  readonly criticals?: readonly number[];
+  /** surveyed reaches: node j's critical depth, worked out on first use and kept (most nodes never need it) */
+  readonly critical?: (node: number) => number;
   /** the control at the downstream end of this piece, if any */
   readonly control?: InternalControl;
   readonly discharge: number;
@@ -184,7 +185,7 @@ function layout(input: ProfileInput, classes: ReachClass[]): Piece[] {
         slope: (nodes[0]!.bedElevation - last.bedElevation) / length,
         bedAtEnd: last.bedElevation,
         nodes,
-        criticals: nodes.map((n) => criticalDepthOf(n.section, q)),
+        critical: lazyCriticals(nodes, q),
         ...(atEnd ? { control: atEnd } : {}),
         discharge: q,
       });
@@ -233,11 +234,39 @@ function reachStart(piece: Piece): number {
   return piece.nodes ? piece.nodes[0]!.station : piece.from;
 }
 
+/** Critical depth per node for one discharge, each computed on first use. */
+function lazyCriticals(nodes: readonly SurveyNode[], discharge: number): (node: number) => number {
+  const kept = new Float64Array(nodes.length).fill(NaN);
+  return (j) => {
+    let yc = kept[j]!;
+    if (Number.isNaN(yc)) kept[j] = yc = criticalDepthOf(nodes[j]!.section, discharge);
+    return yc;
+  };
+}
+
+/** The index of the last node at or upstream of `station` (0 … n − 2, so that j + 1 exists); binary search. */
+function intervalOf(nodes: readonly SurveyNode[], station: number): number {
+  let lo = 0;
+  let hi = nodes.length - 2;
+  while (lo < hi) {
+    const mid = (lo + hi + 1) >> 1;
+    if (nodes[mid]!.station < station) lo = mid;
+    else hi = mid - 1;
+  }
+  return lo;
+}
+
+/** The index of the node nearest `station` (the upstream one of two equally near). */
+function nearestNode(nodes: readonly SurveyNode[], station: number): number {
+  if (nodes.length === 1) return 0;
+  const j = intervalOf(nodes, station);
+  return Math.abs(nodes[j + 1]!.station - station) < Math.abs(nodes[j]!.station - station) ? j + 1 : j;
+}
+
 function bedAt(piece: Piece, station: number): number {
   if (piece.nodes) {
     const nodes = piece.nodes;
-    let j = 0;
-    while (j < nodes.length - 2 && nodes[j + 1]!.station < station) j++;
+    const j = intervalOf(nodes, station);
     const a = nodes[j]!;
     const b = nodes[j + 1]!;
     return a.bedElevation + ((b.bedElevation - a.bedElevation) * (station - a.station)) / (b.station - a.station);
@@ -248,20 +277,24 @@ function bedAt(piece: Piece, station: number): number {
 /** The section at a station of a piece (a surveyed reach: the nearest node's). */
 function sectionAt(piece: Piece, station: number): HydraulicSection {
   if (!piece.nodes) return piece.section;
-  let best = 0;
-  piece.nodes.forEach((n, j) => {
-    if (Math.abs(n.station - station) < Math.abs(piece.nodes![best]!.station - station)) best = j;
-  });
-  return piece.nodes[best]!.section;
+  return piece.nodes[nearestNode(piece.nodes, station)]!.section;
 }
 
 function criticalAt(piece: Piece, station: number): number {
-  if (!piece.criticals) return piece.cls.criticalDepth;
-  let best = 0;
-  piece.nodes!.forEach((n, j) => {
-    if (Math.abs(n.station - station) < Math.abs(piece.nodes![best]!.station - station)) best = j;
-  });
-  return piece.criticals[best]!;
+  if (!piece.critical) return piece.cls.criticalDepth;
+  return piece.critical(nearestNode(piece.nodes!, station));
+}
+
+/**
+ * True when `depth` at a station lies below critical depth there. On a surveyed reach the sign of dE/dy at the depth
+ * tells it where the flow is clearly away from critical (|dE/dy| ≥ nearCriticalBand), without critical depth.
+ */
+function belowCritical(piece: Piece, station: number, depth: number, discharge: number, margin = 1): boolean {
+  if (piece.critical) {
+    const dEdy = pointState(sectionAt(piece, station), depth, discharge).dEdy;
+    if (Math.abs(dEdy) >= nearCriticalBand) return dEdy < 0;
+  }
+  return depth < criticalAt(piece, station) * margin;
 }
 
 /** The class at one end of a piece: a surveyed reach uses the end section with the slope of the end interval. */
@@ -272,7 +305,7 @@ function endClass(piece: Piece, end: 'upstream' | 'downstream'): ReachClass {
   const j = end === 'upstream' ? 0 : nodes.length - 2;
   const slope = (nodes[j]!.bedElevation - nodes[j + 1]!.bedElevation) / (nodes[j + 1]!.station - nodes[j]!.station);
   const node = end === 'upstream' ? nodes[0]! : nodes[nodes.length - 1]!;
-  const yc = piece.criticals![end === 'upstream' ? 0 : nodes.length - 1]!;
+  const yc = piece.critical!(end === 'upstream' ? 0 : nodes.length - 1);
   const yn = slope > 0 ? normalDepthOf(node.section, discharge, slope) : null;
   return { normalDepth: yn, criticalDepth: yc, slopeClass: classifySlope(slope, yn, yc) };
 }
@@ -328,23 +361,27 @@ function run(ctx: Context, spec: StretchSpec): StretchProfile {
  */
 function integratePiece(ctx: Context, piece: Piece, stations: number[], startDepth: number, regime: FlowRegime): StretchProfile {
   if (!piece.nodes) return run(ctx, stretchSpec(ctx, piece, stations, startDepth, regime));
-  const order = stations.map((x) => piece.stations.indexOf(x));
+  // the stations are the piece's nodes, upstream to downstream or the reverse
+  const n = piece.stations.length;
+  const reversed = stations.length > 1 && stations[0]! > stations[1]!;
+  const order = stations.map((_, k) => (reversed ? n - 1 - k : k));
   const system = ctx.input.units.system;
   const refinement = ctx.refinement;
   const result = surveyedStretch(
     piece.nodes,
-    piece.criticals!,
+    piece.critical!,
     order,
     startDepth,
     regime,
     piece.discharge,
     ctx.input.frictionAveraging ?? 'conveyance',
-    (j) => accuracyFor(system, piece.criticals![j]!) / (refinement * refinement),
+    // the accuracy goal's floor: never looser than the goal at the node's critical depth, and it needs no critical depth
+    () => accuracyFor(system, 0) / (refinement * refinement),
   );
   ctx.steps += result.steps;
   if (result.setToCritical === undefined) return { depths: result.depths, steps: result.steps };
   const j = result.setToCritical;
-  return { depths: result.depths, steps: result.steps, stop: { station: piece.stations[j]!, depth: piece.criticals![j]!, reason: 'critical' } };
+  return { depths: result.depths, steps: result.steps, stop: { station: piece.stations[j]!, depth: piece.critical!(j), reason: 'critical' } };
 }
 
 /** A profile over one output interval as a function continuous in x (for the jump toe search). */
@@ -826,7 +863,7 @@ export function computeProfile(input: ProfileInput, options: EngineOptions = {})
       const beyond = final.flat().filter((e) => e.station < stop.station && e.station >= stop.station - ctx.totalLength);
       const pieceIndex = pieces.findIndex((pc) => stop.station >= pc.from && stop.station <= pc.to);
       const own = beyond.filter((e) => e.piece === pieceIndex);
-      stop.resolved = own.every((e) => !e.filled && e.depth < criticalAt(pieces[e.piece]!, e.station) * (1 + 1e-9));
+      stop.resolved = own.every((e) => !e.filled && belowCritical(pieces[e.piece]!, e.station, e.depth, pieces[e.piece]!.discharge, 1 + 1e-9));
     }
     if (!stop.resolved) warnings.push(stop.message);
     else notes.push(resolvedStopNote(stop, jumps));
@@ -898,6 +935,29 @@ function stationResult(piece: Piece, e: Entry, discharge: number): StationResult
   const hs = sectionAt(piece, e.station);
   const state = flowState(hs, e.depth, discharge);
   const bed = bedAt(piece, e.station);
+  if (!piece.nodes) {
+    const yc = piece.cls.criticalDepth;
+    return {
+      station: e.station,
+      bedElevation: bed,
+      depth: e.depth,
+      wsel: bed + e.depth,
+      energyElevation: bed + state.specificEnergy,
+      velocity: state.velocity,
+      froude: state.froude,
+      regime: regimeOf(e.depth, yc),
+      reach: piece.reach.id,
+      criticalDepth: yc,
+      normalDepth: piece.cls.normalDepth,
+    };
+  }
+  // a surveyed node: the regime from dE/dy where the flow is clearly away from critical; critical depth itself is
+  // worked out when it is first read (a long survey reports it at every node and flow, and few steps needed it)
+  const j = nearestNode(piece.nodes, e.station);
+  const critical = piece.critical!;
+  const dEdy = pointState(hs, e.depth, discharge).dEdy;
+  const regime: Regime = Math.abs(dEdy) >= nearCriticalBand ? (dEdy > 0 ? 'subcritical' : 'supercritical') : regimeOf(e.depth, critical(j));
+  let reported: number | undefined;
   return {
     station: e.station,
     bedElevation: bed,
@@ -906,11 +966,16 @@ function stationResult(piece: Piece, e: Entry, discharge: number): StationResult
     energyElevation: bed + state.specificEnergy,
     velocity: state.velocity,
     froude: state.froude,
-    regime: regimeOf(e.depth, criticalAt(piece, e.station)),
+    regime,
     reach: piece.reach.id,
-    criticalDepth: criticalAt(piece, e.station),
-    normalDepth: piece.nodes ? null : piece.cls.normalDepth,
-    ...(piece.nodes && piece.nodes[piece.stations.indexOf(e.station)]?.interpolated ? { interpolated: true } : {}),
+    get criticalDepth(): number {
+      return (reported ??= critical(j));
+    },
+    set criticalDepth(value: number) {
+      reported = value;
+    },
+    normalDepth: null,
+    ...(piece.nodes[j]!.station === e.station && piece.nodes[j]!.interpolated ? { interpolated: true } : {}),
   };
 }
 

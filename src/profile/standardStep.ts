@@ -25,18 +25,21 @@ import {
   errorGrowthLimit,
   errorGrowthTrigger,
   firstStepFraction,
+  guessExpansions,
+  lazyBracketFloor,
   nearCriticalBand,
   nearCriticalFloor,
   profileAccuracySafety,
   profileMaxSteps,
   stepGrowthLimit,
 } from '../core/tolerances.js';
-import type { PointState } from './energy.js';
+import { pointState, type PointState } from './energy.js';
 import { meanFrictionSlope } from './frictionMean.js';
 import {
   type StretchProfile,
   type StretchSpec,
   type StretchStop,
+  branchSign,
   ceilingDepth,
   depthTrend,
   directionOf,
@@ -50,7 +53,63 @@ interface StepOutcome {
   stop?: StretchStop;
 }
 
-/** Solve the energy equation from (x1, s1) to station x2. Exported for the surveyed-reach step and tests. */
+/** A root bracket [a, b] with the function's values at its ends. */
+interface Bracket {
+  readonly a: number;
+  readonly b: number;
+  readonly fa: number;
+  readonly fb: number;
+}
+
+/**
+ * A bracket of a root of f near `guess`: [guess − w, guess + w] inside [lo, hi], widened towards the root (f rising
+ * with depth when `rising` is +1, falling when −1, as the energy residual does on each branch) at most
+ * guessExpansions times, w growing fourfold each time; undefined when none is found that way.
+ */
+function bracketNear(f: (y: number) => number, guess: number, width: number, lo: number, hi: number, rising: number): Bracket | undefined {
+  let w = width;
+  let a = Math.max(lo, guess - w);
+  let b = Math.min(hi, guess + w);
+  let fa = f(a);
+  let fb = f(b);
+  for (let k = 0; ; k++) {
+    if (fa * fb <= 0) return { a, b, fa, fb };
+    if (k >= guessExpansions) return undefined;
+    w *= 4;
+    if (rising * fb < 0) {
+      // still below the root's level at b on a rising curve (above it on a falling one): the root lies above b
+      if (b >= hi) return undefined;
+      a = b;
+      fa = fb;
+      b = Math.min(hi, guess + w);
+      fb = f(b);
+    } else {
+      if (a <= lo) return undefined;
+      b = a;
+      fb = fa;
+      a = Math.max(lo, guess - w);
+      fa = f(a);
+    }
+  }
+}
+
+/** Brent's method on a bracket whose end values are known (they are not evaluated again). */
+function rootIn(f: (y: number) => number, bracket: Bracket, xTolerance: number, what: string): number {
+  const { a, b, fa, fb } = bracket;
+  return brentRoot((y) => (y === a ? fa : y === b ? fb : f(y)), a, b, { xTolerance, what });
+}
+
+/**
+ * Solve the energy equation from (x1, s1) to station x2. Exported for the surveyed-reach step and tests.
+ *
+ * With a guess, the root is first sought in a bracket around it (residuals at its ends, widened a few times
+ * towards the root; Brent only once the residual changes sign). Where spec.criticalDepth is worked out on first
+ * read (spec.lazyCritical, a surveyed section), that bracket is not bounded by critical depth, and its root is
+ * taken when the flow there is clearly on the branch: dE/dy with the branch's sign and at least nearCriticalBand
+ * (F well away from 1). In a section with one critical depth that puts the root on the branch, where the residual
+ * is monotone and the root unique: the same root the whole-branch search gives. Otherwise critical depth is read
+ * and the step solved on the branch as below.
+ */
 export function energyStep(
   spec: StretchSpec,
   x1: number,
@@ -62,7 +121,6 @@ export function energyStep(
 ): StepOutcome {
   const q = spec.discharge;
   const delta = x2 - x1;
-  const yc = spec.criticalDepth;
   const lossSign = delta > 0 ? 1 : -1;
   const residualOf = extraLoss
     ? (s: PointState) =>
@@ -76,9 +134,29 @@ export function energyStep(
   };
   const solved = (y: number): StepOutcome => ({ state: last !== undefined && last.depth === y ? last : stateAt(spec, y) });
   const xTolerance = spec.tolerance * energyStepDepthFraction;
+  const what = 'standard step depth';
   const subcritical = spec.regime === 'subcritical';
+  const rising = branchSign(spec.regime);
+  const top = ceilingDepth(spec);
+  const width = guess !== undefined ? Math.max(0.25 * Math.abs(guess - s1.depth), xTolerance * 100) : 0;
+
+  if (spec.lazyCritical && guess !== undefined && guess > 0 && guess <= top) {
+    // inside the section only (no critical-depth floor: that would need critical depth)
+    const inside = (y: number) => {
+      last = pointState(spec.hs, y > top ? top : y, q);
+      return residualOf(last);
+    };
+    const bracket = bracketNear(inside, guess, width, guess * lazyBracketFloor, top, rising);
+    if (bracket) {
+      const y = rootIn(inside, bracket, xTolerance, what);
+      const state = last !== undefined && last.depth === y ? last : pointState(spec.hs, y, q);
+      if (rising * state.dEdy >= nearCriticalBand) return { state };
+    }
+  }
+
+  const yc = spec.criticalDepth;
   const branchLow = subcritical ? yc : floorDepth(spec);
-  const branchHigh = subcritical ? ceilingDepth(spec) : yc;
+  const branchHigh = subcritical ? top : yc;
 
   // Where the bracket at the branch's critical end fails, the profile reaches the limit within the step:
   // with the end depth fixed there, the residual is linear in the step length, so solve for it.
@@ -91,17 +169,10 @@ export function energyStep(
     return { stop: { station: x1 + d, depth: limit.depth, reason } };
   };
 
-  // A narrow bracket around the predicted depth saves iterations; fall back to the whole branch.
+  // A bracket around the predicted depth saves iterations; fall back to the whole branch.
   if (guess !== undefined && guess > branchLow && guess < branchHigh) {
-    const w = Math.max(0.25 * Math.abs(guess - s1.depth), xTolerance * 100);
-    const a = Math.max(branchLow, guess - w);
-    const b = Math.min(branchHigh, guess + w);
-    // brentRoot checks the bracket itself (and throws when it holds no sign change): no separate evaluations
-    try {
-      return solved(brentRoot(residual, a, b, { xTolerance, what: `standard step depth at station ${x2}` }));
-    } catch (error) {
-      if (!(error instanceof NumericalError)) throw error;
-    }
+    const bracket = bracketNear(residual, guess, width, branchLow, branchHigh, rising);
+    if (bracket) return solved(rootIn(residual, bracket, xTolerance, `${what} at station ${x2}`));
   }
   const critical = stateAt(spec, yc);
   const rc = residualOf(critical);

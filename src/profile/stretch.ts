@@ -24,6 +24,11 @@ export interface StretchSpec {
   readonly startDepth: number;
   readonly regime: FlowRegime;
   readonly criticalDepth: number;
+  /**
+   * true when criticalDepth is worked out on first read (a surveyed section, where most steps are clearly on their
+   * branch and need no critical depth): the standard step then reads it only where it must (see energyStep)
+   */
+  readonly lazyCritical?: boolean;
   readonly normalDepth: number | null;
   /** true on a critical slope (yn ≈ yc): the equation's ratio stays finite near critical depth */
   readonly criticalSlope?: boolean;

@@ -15,7 +15,7 @@ import { HydraulicError } from '../core/errors.js';
 import type { FrictionAveraging, SurveyNode } from './types.js';
 import { pointState, type PointState } from './energy.js';
 import { energyStep } from './standardStep.js';
-import type { FlowRegime } from './stretch.js';
+import type { FlowRegime, StretchSpec } from './stretch.js';
 
 /**
  * The energy balance into a surveyed section needs a water surface above the section's lower end point: the
@@ -60,11 +60,13 @@ export function eddyLoss(node: SurveyNode, upstream: PointState, downstream: Poi
 
 /**
  * Run through the nodes `order` (indices, each next to the previous one), from `startDepth` at the first.
- * Subcritical runs go upstream (decreasing index), supercritical downstream.
+ * Subcritical runs go upstream (decreasing index), supercritical downstream. `critical(j)` gives node j's critical
+ * depth; it is asked only where a step needs it (a step whose solution is not clearly on its branch, and a node
+ * set to critical depth), so a long run computes few critical depths.
  */
 export function surveyedStretch(
   nodes: readonly SurveyNode[],
-  criticals: readonly number[],
+  critical: (node: number) => number,
   order: readonly number[],
   startDepth: number,
   regime: FlowRegime,
@@ -75,6 +77,7 @@ export function surveyedStretch(
   const first = order[0]!;
   let known = pointState(nodes[first]!.section, startDepth, discharge);
   const depths = [startDepth];
+  const subcritical = regime === 'subcritical';
   for (let k = 1; k < order.length; k++) {
     const a = order[k - 1]!;
     const b = order[k]!;
@@ -83,24 +86,32 @@ export function surveyedStretch(
     const length = flowLength(nodes, u);
     const slope = (nodes[u]!.bedElevation - nodes[d]!.bedElevation) / length;
     const delta = b > a ? length : -length;
-    const spec = {
+    const spec: StretchSpec = {
       hs: nodes[b]!.section,
       slope,
       discharge,
       stations: [0, delta],
       startDepth: known.depth,
       regime,
-      criticalDepth: criticals[b]!,
+      get criticalDepth() {
+        return critical(b);
+      },
+      lazyCritical: subcritical,
       normalDepth: null,
       averaging,
       tolerance: tolerance(b),
     };
     const upstreamNode = nodes[u]!;
     const loss = (s1: PointState, s2: PointState) => (b > a ? eddyLoss(upstreamNode, s1, s2) : eddyLoss(upstreamNode, s2, s1));
-    const outcome = energyStep(spec, 0, known, delta, known.depth, loss);
+    // the next depth guessed by carrying on the last change (a survey's nodes are close: the change is smooth). Only
+    // on the subcritical branch: in a compound section the supercritical residual need not be monotone (α varies),
+    // and a bracket near a carried-on guess can then find a depth the whole-branch search rules out, so that run
+    // keeps the known depth as its guess (and the search it always had)
+    const guess = subcritical && k >= 2 ? Math.max(known.depth + (known.depth - depths[k - 2]!), 0.5 * known.depth) : known.depth;
+    const outcome = energyStep(spec, 0, known, delta, guess, loss);
     if (outcome.stop?.reason === 'full') throw new SectionTopReached(nodes[b]!.station, nodes[b]!.section.section.maxDepth);
     if (!outcome.state) {
-      depths.push(criticals[b]!);
+      depths.push(critical(b));
       return { depths, setToCritical: b, steps: k };
     }
     known = outcome.state;
