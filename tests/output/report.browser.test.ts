@@ -5,7 +5,7 @@
  * title shows as text, and that it prints to A4 and Letter; leaves a screenshot in output/.
  * Skips, saying why, only when /usr/bin/chromium is absent (.ci/run installs it).
  */
-import { existsSync } from 'node:fs';
+import { CHROMIUM, hasChromium, launchChromium } from '../helpers/chromium.js';
 import { mkdir, mkdtemp, readFile, rm, writeFile } from 'node:fs/promises';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
@@ -19,8 +19,6 @@ import { renderChart } from '../../src/output/render.js';
 import { buildReport } from '../../src/output/report/html.js';
 import { inventedCompoundSection, rectangleEnergyForce, twoReachInputs, twoReachRun } from './fixtures.js';
 
-const CHROMIUM = '/usr/bin/chromium';
-const hasChromium = existsSync(CHROMIUM);
 const outputDir = fileURLToPath(new URL('../../output/', import.meta.url));
 const title = 'Invented <b>test</b> channel & "culvert" <img src=x onerror="window.pwned=1">';
 
@@ -55,13 +53,7 @@ describe.skipIf(!hasChromium)(hasChromium ? 'report.html in headless Chromium' :
     });
     reportPath = join(work, 'report.html');
     await writeFile(reportPath, html);
-    const { chromium } = await import('playwright-core');
-    context = await chromium.launchPersistentContext(join(work, 'profile'), {
-      executablePath: CHROMIUM,
-      headless: true,
-      args: ['--headless', '--no-sandbox', '--disable-gpu', '--disable-quic', '--no-first-run', '--disable-background-networking', '--disable-component-update', '--disable-sync'],
-      viewport: { width: 1100, height: 900 },
-    });
+    context = await launchChromium(join(work, 'profile'));
   }, 60_000);
 
   afterAll(async () => {

@@ -4,7 +4,8 @@
  * fetched, and a screenshot left in output/ for a person to look at. Skips, saying why, only when
  * /usr/bin/chromium is absent (.ci/run installs it).
  */
-import { existsSync, readFileSync } from 'node:fs';
+import { CHROMIUM, hasChromium, launchChromium } from '../helpers/chromium.js';
+import { readFileSync } from 'node:fs';
 import { mkdir, mkdtemp, rm } from 'node:fs/promises';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
@@ -12,8 +13,6 @@ import { fileURLToPath, pathToFileURL } from 'node:url';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { ensureBuilt, gvf, root } from '../cli/built.js';
 
-const CHROMIUM = '/usr/bin/chromium';
-const hasChromium = existsSync(CHROMIUM);
 const outputDir = fileURLToPath(new URL('../../output/', import.meta.url));
 
 /** The sample `npm start` runs, read from package.json so this test follows it. */
@@ -36,13 +35,7 @@ describe.skipIf(!hasChromium)(hasChromium ? 'gvf run --out report in headless Ch
     work = await mkdtemp(join(tmpdir(), 'gvf-run-browser-'));
     const run = gvf(['run', sample, '--out', join(work, 'out')]);
     if (run.code !== 0) throw new Error(`gvf run ${sample} --out failed: ${run.stderr}`);
-    const { chromium } = await import('playwright-core');
-    context = await chromium.launchPersistentContext(join(work, 'profile'), {
-      executablePath: CHROMIUM,
-      headless: true,
-      args: ['--headless', '--no-sandbox', '--disable-gpu', '--disable-quic', '--no-first-run', '--disable-background-networking', '--disable-component-update', '--disable-sync'],
-      viewport: { width: 1100, height: 900 },
-    });
+    context = await launchChromium(join(work, 'profile'));
   }, 300_000);
 
   afterAll(async () => {
