@@ -2,15 +2,17 @@
  * The longitudinal profile as a Vega-Lite spec: the channel bed over a ground fill, the water surface of each
  * flow over a pale water body, the energy grade line, the critical-depth and normal-depth lines per reach
  * (elevation = bed + depth), bank or lining tops, structures at their stations, each hydraulic jump marked at
- * its toe with its roller length as a bar, and the profile type written on each stretch.
+ * its toe with its roller length as a bar, and the profile type written on each stretch that can hold it.
  *
  * Pure: the data go inline as named datasets (`datasets.lines`, `.ground`, `.water`, `.structures`,
- * `.jumps`, `.labels`), so a user can restyle the saved spec without the run.
+ * `.jumps`, `.labels`; `.unlabelled` lists the stretches whose label did not fit), so a user can restyle the
+ * saved spec without the run.
  */
 import type { TopLevelSpec } from 'vega-lite';
 import type { FlowResult, ReachResult, RunResult, StationResult } from '../../results/types.js';
 import { dash, palette, pick, size, stroke, words, font, chartConfig } from './style.js';
 import { SeriesKey, extent, interpolate, isFiniteNumber, padded, r } from './series.js';
+import { type LabelStretch, estimatedPlot, labelFontSize, placeProfileLabels } from './profileLabels.js';
 
 export interface ProfileStructureMark {
   id: string;
@@ -245,23 +247,6 @@ export function profileChart(run: RunResult, options: ProfileChartOptions = {}):
       }),
   );
 
-  // Profile type on each stretch, at its middle, just above that flow's water surface.
-  // With several flows the labels go at 1/(n+1), 2/(n+1), ... of each stretch, so they do not sit on each other.
-  const labels = flows.flatMap((flow, i) => {
-    const ws = flow.stations.map((s) => ({ x: s.station, y: s.wsel }));
-    const at = (i + 1) / (flows.length + 1);
-    return flow.reaches.flatMap((reach) =>
-      reach.profiles
-        .filter((p) => isFiniteNumber(p.from) && isFiniteNumber(p.to))
-        .map((p) => {
-          const mid = p.from + at * (p.to - p.from);
-          const y = interpolate(ws, mid);
-          return y === null ? null : { station: r(mid), elevation: r(y), text: p.type, flow: flow.id, reach: reach.id, from: r(p.from), to: r(p.to) };
-        })
-        .filter((x): x is NonNullable<typeof x> => x !== null),
-    );
-  });
-
   // Bands and observations (optional): in the flow's water colour, and in the text colour for observations.
   const bandRows = (options.bands ?? []).flatMap((band) => {
     const index = Math.max(0, flows.findIndex((f) => f.id === band.flow));
@@ -345,7 +330,29 @@ export function profileChart(run: RunResult, options: ProfileChartOptions = {}):
   });
   const strokeDash = key.strokeDash(words.legendTitle);
 
+  // Profile type of each stretch, just above that flow's water surface, at a place along the stretch that
+  // differs per flow; labels that would not fit their stretch or would overlap another are left out
+  // (profileLabels.ts), and listed in the `unlabelled` dataset.
   const title = options.title ?? (run.title ? `${run.title}: ${words.profileTitle.toLowerCase()}` : words.profileTitle);
+  const plot = estimatedPlot(width, height, Math.ceil(key.series.length / fittedColumns), Array.isArray(title) ? title.length : 1);
+  const surfaces = flows.map((flow) => flow.stations.map((s) => ({ x: s.station, y: s.wsel })));
+  const stretches: LabelStretch[] = flows.flatMap((flow, i) =>
+    flow.reaches.flatMap((reach) =>
+      reach.profiles
+        .filter((p) => isFiniteNumber(p.from) && isFiniteNumber(p.to))
+        .map((p) => ({ flow: flow.id, flowIndex: i, reach: reach.id, text: p.type, from: p.from, to: p.to })),
+    ),
+  );
+  const labelling = placeProfileLabels(stretches, (i, station) => interpolate(surfaces[i] ?? [], station), {
+    plotWidth: plot.width,
+    plotHeight: plot.height,
+    stations: xr,
+    elevations: [yLow, yHigh],
+    flows: flows.length,
+  });
+  const labels = labelling.placed.map((l) => ({ station: r(l.station), elevation: r(l.elevation), text: l.text, flow: l.flow, reach: l.reach, from: r(l.from), to: r(l.to) }));
+  const unlabelled = labelling.leftOut.map((l) => ({ text: l.text, flow: l.flow, reach: l.reach, from: r(l.from), to: r(l.to), reason: l.reason }));
+
   const layer: unknown[] = [
     {
       name: 'ground',
@@ -440,7 +447,7 @@ export function profileChart(run: RunResult, options: ProfileChartOptions = {}):
     layer.push({
       name: 'profile-labels',
       data: { name: 'labels' },
-      mark: { type: 'text', baseline: 'bottom', dy: -5, fontSize: font.annotationSize + 1, fontWeight: 'bold', color: palette.profileLabel },
+      mark: { type: 'text', baseline: 'bottom', dy: -5, fontSize: labelFontSize, fontWeight: 'bold', color: palette.profileLabel },
       encoding: { x: xPlain, y: { field: 'elevation', type: 'quantitative' }, text: { field: 'text' } },
     });
   }
@@ -460,6 +467,7 @@ export function profileChart(run: RunResult, options: ProfileChartOptions = {}):
       structures,
       jumps: jumpRows,
       labels,
+      unlabelled,
       ...(bandRows.length ? { bands: bandRows } : {}),
       ...(observationRows.length ? { observations: observationRows } : {}),
     },
