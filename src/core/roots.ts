@@ -94,6 +94,12 @@ export function brentRoot(f: (x: number) => number, a: number, b: number, option
 /**
  * Expand [lo, hi] upward (hi doubles) until f changes sign, at most `maxExpansions` times.
  * Returns the bracket or undefined when none was found within the bound.
+ *
+ * Every caller's f rises through its root (negative below it, positive above). Where f is already positive
+ * at lo and no sign change lies above it, the root lies below lo (a depth thinner than the solver's usual
+ * lower end, for a very small discharge in a wide section): lo is then halved, at most `maxExpansions` times,
+ * until f is no longer positive there. Callers that need a root at or above lo check f(lo) ≤ 0 first, so
+ * they never reach the downward search.
  */
 export function expandUpward(
   f: (x: number) => number,
@@ -102,16 +108,31 @@ export function expandUpward(
   maxExpansions = 60,
   ceiling = Infinity,
 ): [number, number] | undefined {
-  let flo = f(lo);
+  const atLo = f(lo);
+  let flo = atLo;
   let a = lo;
   let b = Math.min(hi, ceiling);
   for (let i = 0; i <= maxExpansions; i++) {
     const fb = f(b);
     if (Number.isFinite(flo) && Number.isFinite(fb) && flo * fb <= 0) return [a, b];
-    if (b >= ceiling) return undefined;
+    if (b >= ceiling) break;
     a = b;
     flo = fb;
     b = Math.min(b * 2, ceiling);
+  }
+  return atLo > 0 && Number.isFinite(atLo) ? expandDownward(f, lo, maxExpansions) : undefined;
+}
+
+/** Halve x from `hi` (where f > 0) until f(x) ≤ 0, at most `maxHalvings` times: the bracket [x, 2x], or undefined. */
+function expandDownward(f: (x: number) => number, hi: number, maxHalvings: number): [number, number] | undefined {
+  if (!(hi > 0)) return undefined;
+  let b = hi;
+  for (let i = 0; i < maxHalvings; i++) {
+    const a = b / 2;
+    const fa = f(a);
+    if (!Number.isFinite(fa)) return undefined;
+    if (fa <= 0) return [a, b];
+    b = a;
   }
   return undefined;
 }

@@ -19,9 +19,15 @@ export function smallestDepth(section: Section): number {
   return minimumDepthFraction * section.lengthScale;
 }
 
-/** Absolute depth tolerance for a root bracketed from `near` upward: relative to the depth, floored by the length scale. */
+/**
+ * Absolute depth tolerance for a root bracketed from `near` upward: relative to the depth, floored by the length
+ * scale. A bracket that starts below the smallest depth (core/roots expandUpward searched down for a root thinner
+ * than it) gets the relative tolerance alone: the floor would be larger than the root itself.
+ */
 export function depthTolerance(section: Section, near: number): number {
-  return Math.max(depthAbsoluteTolerance * section.lengthScale, depthRelativeTolerance * Math.abs(near));
+  const relative = depthRelativeTolerance * Math.abs(near);
+  if (Math.abs(near) < smallestDepth(section)) return relative;
+  return Math.max(depthAbsoluteTolerance * section.lengthScale, relative);
 }
 
 /** Throws a HydraulicError unless the discharge is a finite number > 0. */

@@ -7,10 +7,12 @@ import { describe, expect, it } from 'vitest';
 import { SI, US } from '../../src/core/units.js';
 import { circular } from '../../src/geometry/shapes/circular.js';
 import { points } from '../../src/geometry/shapes/points.js';
+import { rectangular } from '../../src/geometry/shapes/rectangular.js';
 import { trapezoidal } from '../../src/geometry/shapes/trapezoidal.js';
 import type { Section } from '../../src/geometry/section.js';
 import type { FrictionLaw } from '../../src/hydraulics/friction.js';
 import { criticalDepths } from '../../src/hydraulics/criticalDepth.js';
+import { depthTolerance, smallestDepth } from '../../src/hydraulics/depthSearch.js';
 import { conveyance, hydraulicSection, type HydraulicSection } from '../../src/hydraulics/hydraulicSection.js';
 import { normalDepths } from '../../src/hydraulics/normalDepth.js';
 import { alternateDepth, specificEnergy } from '../../src/hydraulics/specificEnergy.js';
@@ -122,5 +124,51 @@ describe('depth solvers on random sections', () => {
       }),
       { numRuns: 400, seed: 20261201 },
     );
+  });
+});
+
+/**
+ * Thin flow: a discharge so small for its section that the depth lies below smallestDepth (10⁻⁹ of the length
+ * scale), where the solvers' usual lower end sits. They used to fail with "no bracket found"; the bracket now
+ * reaches down (core/roots expandUpward) and the tolerance becomes relative (depthTolerance). Checked against the
+ * closed forms of a rectangular channel (Chow 1959, ch. 3 and 6; from memory): critical depth (q²/g)^(1/3) with
+ * q = Q/b, and Manning's normal depth of a wide channel, y = (Q·n/(k·b·√S0))^(3/5) when 2y/b is negligible
+ * (here 2y/b < 10⁻⁸, so the wide-channel formula is exact to well inside the test's 10⁻⁷).
+ */
+describe('depth solvers on thin flow (depth below the smallest depth of the section)', () => {
+  const wide = (b: number) => hydraulicSection(rectangular({ bottomWidth: b, roughness: 0.013 }), 'manning', SI);
+
+  it('criticalDepths(rectangular 1000 m, Q = 1e-6 m³/s) equals (q²/g)^(1/3) = 4.67e-7 m, below smallestDepth', () => {
+    const hs = wide(1000);
+    const q = 1e-6 / 1000;
+    const expected = Math.cbrt((q * q) / SI.g);
+    expect(expected).toBeLessThan(smallestDepth(hs.section));
+    const [yc] = criticalDepths(hs, 1e-6);
+    assertRelative(yc!, expected, 1e-8, 'critical depth');
+  });
+
+  it('criticalDepths(rectangular 10,000 ft, Q = 1e-6 ft³/s) equals (q²/g)^(1/3) in US units', () => {
+    const hs = hydraulicSection(rectangular({ bottomWidth: 1e4, roughness: 0.013 }), 'manning', US);
+    const q = 1e-6 / 1e4;
+    const [yc] = criticalDepths(hs, 1e-6);
+    assertRelative(yc!, Math.cbrt((q * q) / US.g), 1e-8, 'critical depth');
+  });
+
+  it("normalDepths(rectangular 1e6 m, Q = 1e-6 m³/s, S0 = 0.01) equals the wide-channel Manning depth", () => {
+    const hs = wide(1e6);
+    const n = 0.013;
+    const b = 1e6;
+    const expected = Math.pow((1e-6 * n) / (SI.manningFactor * b * Math.sqrt(0.01)), 3 / 5);
+    expect(expected).toBeLessThan(smallestDepth(hs.section));
+    const { depth } = normalDepths(hs, 1e-6, 0.01);
+    assertRelative(depth!, expected, 1e-7, 'normal depth');
+  });
+
+  it('depthTolerance(section, near) is relative below the smallest depth and floored by the length scale above it', () => {
+    const section = rectangular({ bottomWidth: 1000, roughness: 0.013 });
+    const lo = smallestDepth(section);
+    expect(depthTolerance(section, lo / 4)).toBe(1e-10 * (lo / 4));
+    expect(depthTolerance(section, lo)).toBe(1e-12 * 1000);
+    expect(depthTolerance(section, 5)).toBe(1e-12 * 1000);
   });
 });

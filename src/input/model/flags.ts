@@ -7,7 +7,7 @@ import { statSync } from 'node:fs';
 import { dirname, resolve } from 'node:path';
 import { InputError, type Problem } from '../../core/errors.js';
 import { type UnitSystem, isUnitSystem } from '../../core/units.js';
-import { largestMagnitude, maxOutputStations, slopeLimit } from './limits.js';
+import { largestMagnitude, maxOutputStations, slopeLimit, smallestDischarge } from './limits.js';
 import * as msg from './messages.js';
 import { sectionProblems } from './rules.js';
 import type { BoundarySpec, FrictionName, Model, SectionShapeName, SectionSpec } from './types.js';
@@ -249,6 +249,10 @@ export function slopeAndDischarge(reader: FlagReader, flags: { slope?: string; d
     reader.problems.push({ where: '--slope', message: msg.slopeTooLarge(slope), value: slope });
   }
   const discharge = reader.number('--discharge', flags.discharge, 'positive', 'the discharge, a number greater than 0');
+  if (discharge !== undefined && discharge < smallestDischarge) {
+    reader.problems.push({ where: '--discharge', message: msg.dischargeTooSmall(discharge), value: discharge });
+    return { slope, discharge: undefined };
+  }
   return { slope, discharge };
 }
 

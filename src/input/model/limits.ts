@@ -21,6 +21,25 @@ export const minimumPoints = 3;
  */
 export const largestMagnitude = 1e7;
 
+/**
+ * The smallest discharge accepted, in m³/s or ft³/s: a millilitre a second (0.03 ml/s in US units). Less is a trickle
+ * a fraction of a millimetre deep even in a gutter, held together by surface tension, not open-channel flow
+ * (common practice; gvf computes smaller flows, but none has the physics its methods assume).
+ */
+export const smallestDischarge = 1e-6;
+
+/**
+ * The smallest bottom width of a rectangular or trapezoidal channel (a trapezoid may also have 0: a triangle) and the
+ * smallest conduit diameter, in m or ft: a millimetre (0.3 mm in US units). A narrower channel is a capillary, where
+ * surface tension and laminar flow rule and none of the friction laws here apply (common practice); a value below it
+ * is a unit mistake (mm typed as m).
+ */
+export const smallestWidth = 1e-3;
+
+/** The largest conduit diameter, in m or ft: the largest tunnels are some 20 m across (from memory); beyond a kilometre
+ *  a diameter is a unit mistake, and the shallowest flows in it fall below the depths the solvers resolve. */
+export const largestDiameter = 1000;
+
 /** At most this many output stations per flow (10 km every 0.1 m): a bound on memory and time, not physics. */
 export const maxOutputStations = 100_000;
 

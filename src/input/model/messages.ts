@@ -3,7 +3,18 @@
  * per message, so wording is reviewed in one place and tests pin it exactly. A message says what was found
  * and what is accepted; the place (JSON path or flag) is the Problem's `where`.
  */
-import { manningRange, alphaRange, slopeLimit, minimumPoints, largestMagnitude, maxNesting, maxOutputStations } from './limits.js';
+import {
+  alphaRange,
+  largestDiameter,
+  largestMagnitude,
+  manningRange,
+  maxNesting,
+  maxOutputStations,
+  minimumPoints,
+  slopeLimit,
+  smallestDischarge,
+  smallestWidth,
+} from './limits.js';
 
 /** A value as a user would recognise it in their file. */
 export function describeValue(value: unknown): string {
@@ -133,6 +144,19 @@ export const severalRoughness = (keys: readonly string[]): string =>
 export const frictionMismatch = (friction: string, key: string, given: string): string =>
   `the friction law "${friction}" takes its roughness from ${key}, but ${given} was given`;
 
+export const widthTooSmall = (what: string, got: unknown, zeroAllowed: boolean): string =>
+  expected(
+    `${zeroAllowed ? '0 (a triangle) or ' : ''}${what} of at least ${smallestWidth} (${smallestWidth} m is a millimetre; a narrower channel is a capillary, ` +
+      'where none of the friction laws apply)',
+    got,
+  );
+
+export const diameterOutOfRange = (got: unknown): string =>
+  expected(
+    `a diameter from ${smallestWidth} to ${largestDiameter} (a narrower conduit is a capillary; the largest tunnels are some 20 m across)`,
+    got,
+  );
+
 export const roughnessTableOrder = (previous: number, got: number): string =>
   `roughness stations must increase across the section: ${got} follows ${previous}`;
 
@@ -163,6 +187,13 @@ export const bothReachKinds = (): string =>
 
 export const slopeTooLarge = (slope: unknown): string =>
   `expected a bed slope as a fraction with magnitude below ${slopeLimit} (0.001 means 0.1 %), got ${describeValue(slope)}`;
+
+export const dischargeTooSmall = (got: unknown): string =>
+  expected(
+    `a discharge from ${smallestDischarge} to ${largestMagnitude} (${smallestDischarge} m³/s is a millilitre a second; less is a trickle ` +
+      'held by surface tension, not open-channel flow)',
+    got,
+  );
 
 export const stageBelowBed = (elevation: number, bed: number, end: string): string =>
   `the stage ${elevation} lies at or below the ${end} bed elevation ${round(bed)}; a stage is a water-surface elevation`;

@@ -4,7 +4,7 @@
  * (checked by the schema or by the flag reader); these rules look at values and at their relations.
  */
 import type { Problem } from '../../core/errors.js';
-import { alphaRange, manningRange, minimumPoints } from './limits.js';
+import { alphaRange, largestDiameter, manningRange, minimumPoints, smallestWidth } from './limits.js';
 import * as msg from './messages.js';
 import type { FrictionName, RoughnessKey, RoughnessTable, SectionSpec } from './types.js';
 import { roughnessKey } from './types.js';
@@ -74,6 +74,7 @@ export function sectionProblems(spec: SectionSpec, whereOf: WhereOf, options: Ru
     problems.push({ where: whereOf('alpha'), message: msg.alphaOutOfRange(spec.alpha), value: spec.alpha });
   }
 
+  problems.push(...dimensionProblems(spec, whereOf));
   if (spec.shape === 'points') problems.push(...pointsProblems(spec.points, whereOf));
   if (spec.shape === 'points' && problems.length === 0) {
     for (const key of roughnessKeys) {
@@ -82,6 +83,24 @@ export function sectionProblems(spec: SectionSpec, whereOf: WhereOf, options: Ru
     }
   }
   return problems;
+}
+
+/**
+ * Widths and diameters no real channel has (limits.ts): the solvers bracket depths from a fraction of the section's
+ * width, so a nanometre slot, or a pipe a hundred kilometres across, sends them beyond their bounds.
+ */
+function dimensionProblems(spec: SectionSpec, whereOf: WhereOf): Problem[] {
+  if (spec.shape === 'rectangular' || spec.shape === 'trapezoidal') {
+    const b = spec.bottomWidth;
+    const zeroAllowed = spec.shape === 'trapezoidal';
+    if (b > 0 && b < smallestWidth) {
+      return [{ where: whereOf('bottomWidth'), message: msg.widthTooSmall('a bottom width', b, zeroAllowed), value: b }];
+    }
+  }
+  if (spec.shape === 'circular' && (spec.diameter < smallestWidth || spec.diameter > largestDiameter)) {
+    return [{ where: whereOf('diameter'), message: msg.diameterOutOfRange(spec.diameter), value: spec.diameter }];
+  }
+  return [];
 }
 
 function pointsProblems(points: ReadonlyArray<readonly [number, number]>, whereOf: WhereOf): Problem[] {

@@ -6,7 +6,7 @@
  * The second pass also runs on the parts that passed the first, so one run reports as much as it can.
  */
 import { InputError, type Problem } from '../../core/errors.js';
-import { largestMagnitude, maxOutputStations, slopeLimit } from './limits.js';
+import { largestMagnitude, maxOutputStations, slopeLimit, smallestDischarge } from './limits.js';
 import * as msg from './messages.js';
 import { formatPath, issueMessage, issuesToProblems } from './issues.js';
 import { sectionProblems } from './rules.js';
@@ -175,6 +175,9 @@ function flowRules(raw: Record<string, unknown>): Problem[] {
     if (typeof flow.id === 'string') ids.push(flow.id);
     if (reservoir && flow.discharge !== undefined) problems.push({ where: `flows[${i}].discharge`, message: msg.dischargeWithReservoir(), value: flow.discharge });
     if (!reservoir && flow.discharge === undefined) problems.push({ where: `flows[${i}].discharge`, message: msg.dischargeRequired() });
+    if (typeof flow.discharge === 'number' && flow.discharge > 0 && flow.discharge < smallestDischarge) {
+      problems.push({ where: `flows[${i}].discharge`, message: msg.dischargeTooSmall(flow.discharge), value: flow.discharge });
+    }
     if (!reservoir && flow.poolElevation !== undefined) problems.push({ where: `flows[${i}].poolElevation`, message: msg.poolWithoutReservoir(), value: flow.poolElevation });
   });
   const downstream = isRecord(boundaries.downstream) ? boundaries.downstream : undefined;

@@ -4,7 +4,7 @@
  */
 import { describe, expect, it } from 'vitest';
 import { InputError } from '../../../src/core/errors.js';
-import { FlagReader, boundaryFromFlag, modelFromProfileFlags, sectionFromFlags } from '../../../src/input/model/flags.js';
+import { FlagReader, boundaryFromFlag, modelFromProfileFlags, sectionFromFlags, slopeAndDischarge } from '../../../src/input/model/flags.js';
 
 function read(flags: Record<string, string | boolean>) {
   const reader = new FlagReader();
@@ -46,6 +46,37 @@ describe('sectionFromFlags(reader, flags)', () => {
     expect(read({ shape: 'rectangular', bottomWidth: '2', n: '0.015', alpha: '0.8' }).problems).toEqual([
       '--alpha: α must lie between 1 and 3 (it is 1 for uniform velocity), got 0.8',
     ]);
+  });
+
+  it('sectionFromFlags(flags) refuses widths and diameters no real channel has, stating the range (limits.ts)', () => {
+    // the limits are gvf's own plausibility bounds (common practice: a millimetre slot is a capillary)
+    const narrow = 'a bottom width of at least 0.001 (0.001 m is a millimetre; a narrower channel is a capillary, where none of the friction laws apply), got 1e-9';
+    expect(read({ shape: 'rectangular', bottomWidth: '1e-9', n: '0.013' }).problems).toEqual([`--bottom-width: expected ${narrow}`]);
+    expect(read({ shape: 'trapezoidal', bottomWidth: '1e-9', sideSlope: '2', n: '0.013' }).problems).toEqual([
+      `--bottom-width: expected 0 (a triangle) or ${narrow}`,
+    ]);
+    const range = 'a diameter from 0.001 to 1000 (a narrower conduit is a capillary; the largest tunnels are some 20 m across)';
+    expect(read({ shape: 'circular', diameter: '1e-9', n: '0.013' }).problems).toEqual([`--diameter: expected ${range}, got 1e-9`]);
+    expect(read({ shape: 'circular', diameter: '5000', n: '0.013' }).problems).toEqual([`--diameter: expected ${range}, got 5000`]);
+    // the ends of the ranges, and a trapezoid with no bottom (a triangle), are accepted
+    expect(read({ shape: 'rectangular', bottomWidth: '0.001', n: '0.013' }).problems).toEqual([]);
+    expect(read({ shape: 'trapezoidal', bottomWidth: '0', sideSlope: '2', n: '0.013' }).problems).toEqual([]);
+    expect(read({ shape: 'circular', diameter: '1000', n: '0.013' }).problems).toEqual([]);
+  });
+
+  it('slopeAndDischarge(flags) refuses a discharge below 0.000001 (limits.ts smallestDischarge) and accepts it at the limit', () => {
+    const readQ = (discharge: string) => {
+      const reader = new FlagReader();
+      const found = slopeAndDischarge(reader, { slope: '0.001', discharge });
+      return { found, problems: reader.problems.map((p) => `${p.where}: ${p.message}`) };
+    };
+    expect(readQ('1e-12')).toEqual({
+      found: { slope: 0.001, discharge: undefined },
+      problems: [
+        '--discharge: expected a discharge from 0.000001 to 10000000 (0.000001 m³/s is a millilitre a second; less is a trickle held by surface tension, not open-channel flow), got 1e-12',
+      ],
+    });
+    expect(readQ('1e-6')).toEqual({ found: { slope: 0.001, discharge: 1e-6 }, problems: [] });
   });
 
   it('sectionFromFlags(flags) with --force accepts an unusual n', () => {

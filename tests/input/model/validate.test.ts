@@ -140,6 +140,27 @@ describe('validateModel(json, file)', () => {
     ]);
   });
 
+  it('validateModel(json) refuses a discharge, bottom width or diameter no real channel has, at its path with the range', () => {
+    // limits.ts: gvf's own plausibility bounds (common practice), not physics; the values at the limits are accepted
+    const json = edit((m) => {
+      m.flows[0]!.discharge = 1e-12;
+      m.sections.lined.bottomWidth = 1e-9;
+    });
+    expect(lines(json)).toEqual([
+      'sections.lined.bottomWidth: expected 0 (a triangle) or a bottom width of at least 0.001 (0.001 m is a millimetre; a narrower channel is a capillary, where none of the friction laws apply), got 1e-9',
+      'flows[0].discharge: expected a discharge from 0.000001 to 10000000 (0.000001 m³/s is a millilitre a second; less is a trickle held by surface tension, not open-channel flow), got 1e-12',
+    ]);
+    const pipe = edit((m) => ((m.sections as Record<string, unknown>).lined = { shape: 'circular', diameter: 5000, n: 0.013 }));
+    expect(lines(pipe)).toEqual([
+      'sections.lined.diameter: expected a diameter from 0.001 to 1000 (a narrower conduit is a capillary; the largest tunnels are some 20 m across), got 5000',
+    ]);
+    const atLimits = edit((m) => {
+      m.flows[0]!.discharge = 1e-6;
+      m.sections.lined.bottomWidth = 0.001;
+    });
+    expect(validateModel(atLimits, 'model.json').flows[0]!.discharge).toBe(1e-6);
+  });
+
   it("validateModel(json) keeps Manning's n within 0.005–0.2 unless forced", () => {
     const json = edit((m) => (m.sections.lined.n = 0.5));
     expect(lines(json)).toEqual([
