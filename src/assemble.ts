@@ -16,6 +16,7 @@ import type { Model } from './input/model/types.js';
 import { hydraulicSectionOf } from './assembleSection.js';
 import { isSurveyReach } from './input/model/survey.js';
 import { formatPath } from './input/model/issues.js';
+import { scaledRoughnessSpec } from './input/model/roughness.js';
 import type { ProfileInput, ReachInput } from './profile/types.js';
 import { assembleExtras, structuredFlowInput } from './assembleStructures.js';
 import type { StructuredFlowInput } from './structures/controls/flow.js';
@@ -51,6 +52,12 @@ export interface AssembleOptions {
   readonly modelFile?: string;
   /** read data files outside the model's folder (--allow-outside) */
   readonly allowOutside?: boolean;
+  /**
+   * Each reach's roughness multiplier (calibration, sensitivity; 1 when absent). A prismatic reach's section is
+   * built again from its spec with the roughness scaled (one per section and multiplier); surveyed reaches come
+   * scaled already (loadChannelSurvey takes the same option).
+   */
+  readonly roughnessMultiplier?: (reachId: string) => number;
 }
 
 /** One engine input per flow of the model (with its structures, special ends and flow changes: assembleStructures.ts). */
@@ -60,13 +67,25 @@ export function assembleProfileInputs(
   options: AssembleOptions = {},
 ): StructuredFlowInput[] {
   const units = unitsOf(model.units);
+  const scaled = new Map<string, HydraulicSection>();
+  const sectionFor = (name: string, m: number): HydraulicSection | undefined => {
+    const spec = model.sections[name];
+    if (m === 1 || spec === undefined) return sections.get(name);
+    const key = `${name}\u0000${m}`;
+    let hs = scaled.get(key);
+    if (hs === undefined) {
+      const base = formatPath(['sections', name]);
+      scaled.set(key, (hs = hydraulicSectionOf(scaledRoughnessSpec(spec, m), units, (k) => `${base}.${k}`)));
+    }
+    return hs;
+  };
   const reaches: ReachInput[] = model.reaches.map((reach, i) => {
     if (isSurveyReach(reach)) {
       const surveyed = options.surveyReaches?.get(i);
       if (surveyed === undefined) throw new InputError({ where: `reaches[${i}].survey`, message: 'the survey of this reach was not read (the run needs the model file)' });
       return surveyed;
     }
-    const section = sections.get(reach.section);
+    const section = sectionFor(reach.section, options.roughnessMultiplier?.(reach.id) ?? 1);
     if (section === undefined) {
       throw new InputError({ where: `reaches[${i}].section`, message: `no section named ${JSON.stringify(reach.section)}`, value: reach.section });
     }

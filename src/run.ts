@@ -38,8 +38,15 @@ export interface RunOptions {
   /** also run the other two methods and compare */
   readonly compare?: boolean;
   /**
-   * Changes each flow's engine input before it is computed (src/analysis: roughness multipliers, varied
-   * discharges, a downstream stage per flow of a batch). The stages and the comparison see the changed inputs.
+   * Each reach's roughness multiplier by reach id (src/analysis: calibration, sensitivity; 1 when absent; m > 1
+   * rougher). It is applied to the section specs before sections are built: a prismatic reach's section, and
+   * every surveyed section of a surveyed reach, so the sections interpolated between them carry it too.
+   */
+  readonly roughnessMultiplier?: (reachId: string) => number;
+  /**
+   * Changes each flow's engine input before it is computed (src/analysis: varied discharges, a downstream stage
+   * per flow of a batch). The stages and the comparison see the changed inputs. Not for roughness: a surveyed
+   * reach's nodes are replaced by its survey's (with interpolated ones) after this, so use roughnessMultiplier.
    */
   readonly adjustInput?: (input: ProfileInput, index: number) => ProfileInput;
   /** called after each flow is computed (the CLI's progress bar) */

@@ -14,13 +14,14 @@
  * responds to is left at 1 rather than wandering to a bound.
  */
 import { InputError, type Problem } from '../core/errors.js';
+import { scaleRoughness } from '../input/model/roughness.js';
 import { resolveRoughness } from '../input/model/rules.js';
+import { isSurveyReach } from '../input/model/survey.js';
 import type { Model } from '../input/model/types.js';
 import type { FlowResult } from '../results/types.js';
 import { type ModelRun, type RunOptions, runModel } from '../run.js';
 import { boundedLeastSquares, jacobianOf, solveLinear } from './leastSquares.js';
 import * as say from './messages.js';
-import { refuseSurveyedRoughness, withRoughnessMultipliers } from './roughness.js';
 import { sampleProfile, stationRange } from './sample.js';
 import { atCriticalFraction, insensitiveMarkFraction, jacobianStep, multiplierBounds } from './tolerances.js';
 
@@ -44,12 +45,13 @@ export interface CalibrationOptions {
   readonly lower?: number;
   readonly upper?: number;
   /** options of every run (method, output spacing, the model file for surveyed reaches...) */
-  readonly run?: Omit<RunOptions, 'adjustInput' | 'compare' | 'onProgress'>;
+  readonly run?: Omit<RunOptions, 'adjustInput' | 'roughnessMultiplier' | 'compare' | 'onProgress'>;
   /** after each accepted step of the fit */
   readonly onIteration?: (iteration: number, cost: number) => void;
 }
 
 export interface SectionRoughness {
+  /** the model section's name, or "reach ID (surveyed)" for the sections of a surveyed reach (their roughness varies) */
   section: string;
   /** 'n', 'chezy' or 'ks' */
   key: string;
@@ -123,11 +125,14 @@ function parametersOf(model: Model, perReach: boolean): Parameter[] {
   return perReach ? ids.map((id) => ({ id, reaches: [id] })) : [{ id: wholeModel, reaches: ids }];
 }
 
-/** The run with the multipliers of `params` at values `m`. */
+/**
+ * The run with the multipliers of `params` at values `m`: through runModel's roughnessMultiplier, which scales
+ * the section specs of prismatic and surveyed reaches alike (and so the sections interpolated in a survey).
+ */
 function runWith(model: Model, params: readonly Parameter[], m: readonly number[], options: CalibrationOptions): ModelRun {
   const of = new Map<string, number>();
   params.forEach((p, j) => p.reaches.forEach((id) => of.set(id, m[j]!)));
-  return runModel(model, { ...options.run, adjustInput: (input) => withRoughnessMultipliers(input, (id) => of.get(id) ?? 1) });
+  return runModel(model, { ...options.run, roughnessMultiplier: (id) => of.get(id) ?? 1 });
 }
 
 function flowOf(run: ModelRun, id: string): FlowResult {
@@ -196,17 +201,29 @@ function rms(values: readonly number[], weights?: readonly number[]): number {
   return Math.sqrt(s / w);
 }
 
-function roughnessOf(model: Model, reaches: readonly string[], m: number): SectionRoughness[] {
+function roughnessOf(model: Model, run: ModelRun, reaches: readonly string[], m: number): SectionRoughness[] {
   const out: SectionRoughness[] = [];
   for (const id of reaches) {
-    const reach = model.reaches.find((r) => r.id === id) as { section?: unknown } | undefined;
-    const name = typeof reach?.section === 'string' ? reach.section : undefined;
-    if (name === undefined || out.some((r) => r.section === name)) continue;
+    const index = model.reaches.findIndex((r) => r.id === id);
+    const reach = model.reaches[index];
+    if (reach === undefined) continue;
+    // a surveyed reach: its survey's roughness (by station and zone) is multiplied as a whole; the key is that of
+    // its sections (Manning's n in the survey files, a model section's own key where a station names one)
+    if (isSurveyReach(reach)) {
+      const keys = new Set((run.stages.survey?.sites.get(index) ?? []).map((site) => {
+        const spec = model.sections[site.sectionId];
+        return spec === undefined ? 'n' : (resolveRoughness(spec)?.key ?? 'n');
+      }));
+      for (const key of keys.size === 0 ? ['n'] : keys) out.push({ section: `reach ${id} (surveyed)`, key, model: null, calibrated: null });
+      continue;
+    }
+    const name = reach.section;
+    if (out.some((r) => r.section === name)) continue;
     const spec = model.sections[name];
     const rough = spec === undefined ? undefined : resolveRoughness(spec);
     if (rough === undefined) continue;
     const value = typeof rough.value === 'number' ? rough.value : null;
-    const calibrated = value === null ? null : rough.key === 'chezy' ? value / m : value * m;
+    const calibrated = value === null ? null : scaleRoughness(value, rough.friction, m);
     out.push({ section: name, key: rough.key, model: value, calibrated });
   }
   return out;
@@ -232,7 +249,6 @@ function standardErrors(jacobian: readonly number[][], residuals: readonly numbe
 /** Fit roughness multipliers to high-water marks. */
 export function calibrateRoughness(model: Model, marks: readonly ObservedMark[], options: CalibrationOptions = {}): Calibration {
   if (marks.length === 0) throw new InputError({ where: 'marks', message: say.noMarks() });
-  refuseSurveyedRoughness(model, 'calibration');
   const lower = options.lower ?? multiplierBounds.lower;
   const upper = options.upper ?? multiplierBounds.upper;
   const unit = model.units === 'US' ? 'ft' : 'm';
@@ -329,7 +345,7 @@ export function calibrateRoughness(model: Model, marks: readonly ObservedMark[],
       fitted: responds.includes(j),
       atBound,
       standardError: errors[j] ?? null,
-      roughness: roughnessOf(model, p.reaches, value),
+      roughness: roughnessOf(model, run, p.reaches, value),
     };
   });
 

@@ -26,9 +26,6 @@ export const boundsRange = (lower: number, upper: number, lo: number, hi: number
   `bounds ${lower}:${upper} must satisfy ${lo} ≤ lower < 1 < upper ≤ ${hi}`;
 export const optionRequired = (what: string) => `required: ${what}`;
 
-export const surveyedRoughness = (what: string, reach: string) =>
-  `${what} scales the roughness of prismatic reaches only; reach ${JSON.stringify(reach)} is surveyed (its sections come from its survey files), so gvf cannot vary its roughness yet: vary Q only, or describe the reach by a model section`;
-
 /* ---- calibration ---- */
 export const noMarks = () => 'no high-water marks to calibrate with';
 export const markOutside = (station: number, flow: string, lo: number, hi: number) =>

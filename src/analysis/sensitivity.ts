@@ -13,9 +13,8 @@ import type { FlowResult } from '../results/types.js';
 import { type ModelRun, type RunOptions, runModel } from '../run.js';
 import * as say from './messages.js';
 import { sampleProfile, stationRange } from './sample.js';
-import { refuseSurveyedRoughness } from './roughness.js';
 import { jumpShiftFraction } from './tolerances.js';
-import { type SensitivityCase, type Variation, sensitivityCases, variedInput } from './variation.js';
+import { type SensitivityCase, type Variation, caseRoughness, sensitivityCases, variedDischarge } from './variation.js';
 
 export interface StationEnvelope {
   station: number;
@@ -82,7 +81,7 @@ export interface SensitivityRun {
 
 export interface SensitivityOptions {
   /** options of every run; an `adjustInput` here (a flow batch's stages) is applied before each case's variation */
-  readonly run?: Omit<RunOptions, 'compare'>;
+  readonly run?: Omit<RunOptions, 'compare' | 'roughnessMultiplier'>;
   /** the base run, when the caller has it already (it must come from the same model and options) */
   readonly base?: ModelRun;
   /** after each case (for progress) */
@@ -165,7 +164,6 @@ function flowSensitivity(baseFlow: FlowResult, cases: readonly { case: Sensitivi
 
 /** Run the base and every varied case; envelope, profile-type and jump changes per flow. */
 export function sensitivityAnalysis(model: Model, variations: readonly Variation[], options: SensitivityOptions = {}): SensitivityRun {
-  if (variations.some((v) => v.parameter === 'n')) refuseSurveyedRoughness(model, 'a sensitivity to roughness');
   const cases = sensitivityCases(variations);
   const warnings: string[] = [];
   const runs: { case: SensitivityCase; run: ModelRun }[] = [];
@@ -176,7 +174,12 @@ export function sensitivityAnalysis(model: Model, variations: readonly Variation
     else {
       try {
         const first = options.run?.adjustInput;
-        run = runModel(model, { ...options.run, adjustInput: (input, k) => variedInput(first === undefined ? input : first(input, k), c) });
+        const roughness = caseRoughness(c);
+        run = runModel(model, {
+          ...options.run,
+          ...(roughness === undefined ? {} : { roughnessMultiplier: roughness }),
+          adjustInput: (input, k) => variedDischarge(first === undefined ? input : first(input, k), c),
+        });
       } catch (error) {
         // a varied case the physics or the model cannot take (a structure overtopped, a control that cannot
         // hold) is reported and left out of the envelope; the base case must compute

@@ -1,11 +1,11 @@
 /**
- * Varied cases for a sensitivity run: roughness (a multiplier on every reach's roughness, see roughness.ts) and
+ * Varied cases for a sensitivity run: roughness (a multiplier on every reach's roughness, RunOptions.roughnessMultiplier:
+ * the section specs of prismatic and surveyed reaches, and so the sections interpolated in a survey) and
  * discharge (a factor on each flow's discharge), each at −p %, 0 and +p %, in every combination (3^k cases,
  * the base case first). Every combination rather than one at a time, so the envelope includes the corners
  * (rougher and more flow) where the water stands highest.
  */
 import type { ProfileInput, ReachInput } from '../profile/types.js';
-import { withRoughnessMultipliers } from './roughness.js';
 
 export const SensitivityParameter = { n: 'n', Q: 'Q' } as const;
 export type SensitivityParameter = keyof typeof SensitivityParameter;
@@ -48,13 +48,17 @@ export function sensitivityCases(variations: readonly Variation[]): SensitivityC
   return combos.map((c) => ({ label: c.parts.length === 0 ? 'base' : c.parts.join(', '), n: c.n, Q: c.Q, base: c.parts.length === 0 }));
 }
 
+/** The roughness multiplier of a case's runs, for RunOptions.roughnessMultiplier (absent in a case without one). */
+export function caseRoughness(c: Pick<SensitivityCase, 'n'>): ((reachId: string) => number) | undefined {
+  return c.n === 1 ? undefined : () => c.n;
+}
+
 /**
- * The engine input of one case: every reach's roughness times `n`, the discharge times `Q` (and a reach's own
- * discharge, where a flow change gives it one, by the same factor: the whole hydrograph scaled).
+ * The engine input of one case, discharge only: times `Q` (and a reach's own discharge, where a flow change
+ * gives it one, by the same factor: the whole hydrograph scaled). The roughness goes by caseRoughness.
  */
-export function variedInput(input: ProfileInput, c: Pick<SensitivityCase, 'n' | 'Q'>): ProfileInput {
-  const rough = c.n === 1 ? input : withRoughnessMultipliers(input, () => c.n);
-  if (c.Q === 1) return rough;
-  const reaches = rough.reaches.map((r): ReachInput => (r.discharge === undefined ? r : { ...r, discharge: r.discharge * c.Q }));
-  return { ...rough, reaches, discharge: rough.discharge * c.Q };
+export function variedDischarge(input: ProfileInput, c: Pick<SensitivityCase, 'Q'>): ProfileInput {
+  if (c.Q === 1) return input;
+  const reaches = input.reaches.map((r): ReachInput => (r.discharge === undefined ? r : { ...r, discharge: r.discharge * c.Q }));
+  return { ...input, reaches, discharge: input.discharge * c.Q };
 }

@@ -25,6 +25,11 @@ import { type StationMap, identityStations, isIdentity, mapFlowStations, station
 export interface SurveyOptions extends Partial<SurveyFileOptions> {
   /** insert interpolated sections where the accuracy goal needs them (default true; the CLI's --no-interpolate) */
   readonly interpolate?: boolean;
+  /**
+   * Each reach's roughness multiplier (calibration, sensitivity; 1 when absent): applied to the survey's
+   * section specs before the sections are built, so interpolated sections, blended from them, carry it too.
+   */
+  readonly roughnessMultiplier?: (reachId: string) => number;
 }
 
 export interface ChannelSurvey {
@@ -79,7 +84,7 @@ export function loadChannelSurvey(model: Model, sections: ReadonlyMap<string, Hy
           continue;
         }
       }
-      const sites = surveySites(files, reach.survey, units, model.sections, sections, engineAt);
+      const sites = surveySites(files, reach.survey, units, model.sections, sections, engineAt, options.roughnessMultiplier?.(reach.id) ?? 1);
       sitesOf.set(i, sites);
       reaches.set(i, { kind: 'surveyed', id: reach.id, nodes: sites.map((s) => s.node) });
       engineAt = sites[sites.length - 1]!.node.station;

@@ -10,6 +10,9 @@
  *   cell is a problem. Model sections are shapes without elevations and are placed at the stated bed.
  * - Manning's n on a station row overrides the section's roughness over the whole section (zones included);
  *   otherwise the cross-section's n (by zone) or the model section's roughness applies.
+ * - A roughness multiplier (calibration, sensitivity: input/model/roughness.ts) scales that roughness in the
+ *   spec, before the section is built, so every zone of every surveyed section carries it, and so does every
+ *   section interpolated from them (interpolate.ts blends the built sections, roughness included).
  * - Banks: the station row's left and right bank elevations; where a surveyed cross-section has none, the
  *   elevations of its end points (the surveyed ground at the section's edges).
  * - Reach length: the row's flow-path length to the next station downstream, else the station difference.
@@ -21,6 +24,7 @@ import { createSection } from '../geometry/index.js';
 import { type HydraulicSection, hydraulicSection } from '../hydraulics/hydraulicSection.js';
 import type { CrossSectionRows, StationRow } from '../input/csv/index.js';
 import { formatPath } from '../input/model/issues.js';
+import { scaleManning, scaledRoughnessSpec } from '../input/model/roughness.js';
 import { resolveRoughness } from '../input/model/rules.js';
 import { type SurveySpec, surveyDefaults } from '../input/model/survey.js';
 import type { SectionSpec } from '../input/model/types.js';
@@ -49,7 +53,8 @@ const at = (file: string, line: number, column?: number) => (column === undefine
 
 /**
  * The sites of one surveyed reach, upstream first. `engineStart` is the engine station of its upstream end;
- * `modelSections` are the model's section specs and `built` their hydraulic sections.
+ * `modelSections` are the model's section specs and `built` their hydraulic sections; `multiplier` scales the
+ * roughness of every section of the reach (1: the survey's and the model's own).
  */
 export function surveySites(
   files: SurveyFiles,
@@ -58,6 +63,7 @@ export function surveySites(
   modelSections: Readonly<Record<string, SectionSpec>>,
   built: ReadonlyMap<string, HydraulicSection>,
   engineStart: number,
+  multiplier = 1,
 ): SurveySite[] {
   const problems: Problem[] = [];
   const file = files.stationsFile;
@@ -92,7 +98,8 @@ export function surveySites(
       let hs = cache.get(key);
       if (hs === undefined) {
         try {
-          hs = hydraulicSection(createSection({ shape: 'points', points: cs.points, roughness }), 'manning', units);
+          const scaled = multiplier === 1 ? roughness : scaleManning(roughness, multiplier);
+          hs = hydraulicSection(createSection({ shape: 'points', points: cs.points, roughness: scaled }), 'manning', units);
         } catch (error) {
           if (!(error instanceof InputError)) throw error;
           problems.push(...error.problems.map((p) => ({ ...p, where: where, message: `cross-section ${JSON.stringify(row.section)}: ${p.message}` })));
@@ -106,9 +113,9 @@ export function surveySites(
     const base = built.get(row.section);
     const where = formatPath(['sections', row.section]);
     if (model === undefined || base === undefined) return undefined; // reported by the stations reader, or by the section itself
-    if (row.n === undefined) return { hs: base, where };
+    if (row.n === undefined && multiplier === 1) return { hs: base, where };
     const resolved = resolveRoughness(model);
-    if (resolved?.friction !== 'manning') {
+    if (row.n !== undefined && resolved?.friction !== 'manning') {
       problems.push({
         where: nWhere,
         message: `section ${JSON.stringify(row.section)} uses the ${resolved?.friction ?? 'unknown'} friction law, so a Manning's n here cannot override its roughness; leave the n cell empty`,
@@ -118,8 +125,8 @@ export function surveySites(
     }
     let hs = cache.get(key);
     if (hs === undefined) {
-      const withN = { ...model, n: row.n } as SectionSpec;
-      hs = hydraulicSectionOf(withN, units, (k) => `${where}.${k}`);
+      const withN = row.n === undefined ? model : ({ ...model, n: row.n } as SectionSpec);
+      hs = hydraulicSectionOf(scaledRoughnessSpec(withN, multiplier), units, (k) => `${where}.${k}`);
       cache.set(key, hs);
     }
     return { hs, where };

@@ -5,19 +5,25 @@
  */
 import { describe, expect, it } from 'vitest';
 import { type ObservedMark, calibrateRoughness } from '../../src/analysis/calibrate.js';
-import { withRoughnessMultipliers } from '../../src/analysis/roughness.js';
 import { wselAt } from '../../src/analysis/sample.js';
 import { InputError } from '../../src/core/errors.js';
 import type { Model } from '../../src/input/model/types.js';
-import { runModel } from '../../src/run.js';
+import { type RunOptions, runModel } from '../../src/run.js';
+import { surveyedTrapezoid } from '../survey/trapezoidSurvey.js';
 import { assertInDelta } from '../helpers/assert.js';
 import { readModelFile } from '../../src/input/model/parse.js';
 import { validateModel } from '../../src/input/model/validate.js';
 import { gaussian, mildToSteepModel, seeded, twoReachModel } from './models.js';
 
 /** Marks at `stations` of every flow, from a run with multiplier `of(reach)`, plus noise from `noise()`. */
-function marksFrom(model: Model, of: (reach: string) => number, stations: readonly number[], noise: () => number = () => 0): ObservedMark[] {
-  const run = runModel(model, { adjustInput: (input) => withRoughnessMultipliers(input, of) });
+function marksFrom(
+  model: Model,
+  of: (reach: string) => number,
+  stations: readonly number[],
+  noise: () => number = () => 0,
+  options: RunOptions = {},
+): ObservedMark[] {
+  const run = runModel(model, { ...options, roughnessMultiplier: of });
   return run.result.flows.flatMap((flow) => stations.map((station) => ({ station, elevation: wselAt(flow, station)! + noise(), flow: flow.id })));
 }
 
@@ -116,10 +122,41 @@ describe('calibrateRoughness', () => {
     expect(fit.warnings[0]).toMatch(/^mark at station 295 \(flow test\): roughness hardly moves the water surface here .*: the water surface is held by the sharp-crested weir at station 300;/);
   });
 
-  it('calibrateRoughness refuses a model with surveyed reaches (their sections are rebuilt from the survey)', () => {
+  it('calibrateRoughness(surveyed sample, whole model) recovers 1.2 from synthetic marks on samples/survey-drain to 1e-3', () => {
+    // the marks are synthetic: computed by gvf itself with every surveyed section's n times 1.2, on the mild
+    // lower reach (an M1 backwater from the pool), for all three flows. The steep upper reach is left without
+    // marks: its water surface there jumps between a hydraulic jump and none as n changes, which no smooth fit follows
+    const file = 'samples/survey-drain/model.json';
+    const model = readModelFile(file);
+    const run = { modelFile: file };
+    const fit = calibrateRoughness(model, marksFrom(model, () => 1.2, [60, 120, 180, 240, 300], () => 0, run), { run });
+    assertInDelta(fit.multipliers[0]!.multiplier, 1.2, 1e-3, 'multiplier');
+    expect(fit.rmse).toBeLessThan(1e-4);
+    expect(fit.rmseBefore).toBeGreaterThan(0.02);
+    expect(fit.marks.every((m) => !m.insensitive)).toBe(true);
+    expect(fit.multipliers[0]!.roughness).toEqual([
+      { section: 'reach upper (surveyed)', key: 'n', model: null, calibrated: null },
+      { section: 'reach lower (surveyed)', key: 'n', model: null, calibrated: null },
+    ]);
+  });
+
+  it('calibrateRoughness(surveyed reaches, per reach) recovers 0.8 upstream and 1.25 downstream from synthetic marks to 1e-3', () => {
+    // an invented surveyed trapezoid (tests/survey/trapezoidSurvey.ts), two reaches of 1 km behind a fixed stage,
+    // with interpolated sections between stations 250 m apart; marks synthetic (gvf with the true multipliers)
+    const channel = surveyedTrapezoid(['upper', 'lower'], 1000, 250, [{ id: 'q', discharge: 4 }], { downstream: { type: 'stage', elevation: 9.6 } });
+    const truth: Record<string, number> = { upper: 0.8, lower: 1.25 };
+    const run = { modelFile: channel.file };
+    const marks = marksFrom(channel.model, (id) => truth[id]!, [100, 300, 500, 700, 900, 1100, 1300, 1500, 1700], () => 0, run);
+    const fit = calibrateRoughness(channel.model, marks, { perReach: true, run });
+    expect(fit.multipliers.map((m) => m.id)).toEqual(['upper', 'lower']);
+    assertInDelta(fit.multipliers[0]!.multiplier, 0.8, 1e-3, 'upper');
+    assertInDelta(fit.multipliers[1]!.multiplier, 1.25, 1e-3, 'lower');
+  });
+
+  it('calibrateRoughness(surveyed reaches) without the model file is refused: the survey files are read relative to it', () => {
     const model = readModelFile('samples/survey-drain/model.json');
-    expect(() => calibrateRoughness(model, [{ station: 10, elevation: 12, flow: model.flows[0]!.id }])).toThrow(
-      /^reaches\[\d+\]\.survey: calibration scales the roughness of prismatic reaches only; reach "[^"]+" is surveyed/,
+    expect(() => calibrateRoughness(model, [{ station: 100, elevation: 12, flow: model.flows[0]!.id }])).toThrow(
+      /^reaches\[0\]\.survey: a surveyed reach reads files relative to the model file/,
     );
   });
 
