@@ -1,7 +1,7 @@
 /**
  * gvf as a library: the public names, re-exported layer by layer (index files only re-export).
  *
- *   core → input → geometry → hydraulics → profile → structures → results → run → output
+ *   core → input → geometry → hydraulics → profile → structures → results → run → analysis → output
  *
  * The charting and report modules (vega, vega-lite, resvg) are not re-exported here, so importing gvf stays
  * light; import them from their own modules when charts are wanted.
@@ -81,6 +81,10 @@ export type {
 export { assembleProfileInputs, assembleSections, geometrySpecOf, hydraulicSectionOf } from './assemble.js';
 export { runModel, type ModelRun, type RunOptions, type RunStages, type MethodComparison, type FlowComparison } from './run.js';
 export { runSection, screeningCaution, type SectionRunInput, type SectionRunResult, type SectionState } from './runSection.js';
+
+// analysis: calibration to high-water marks, sensitivity envelopes, rating tables, flow batches (plain data;
+// their charts and reports are in the output layer, not re-exported)
+export * from './analysis/index.js';
 
 // output: text tables and CSV
 export { formatTable, formatNumber, formatPairs, runReport, sectionReport } from './output/table.js';

@@ -2,12 +2,9 @@
  * `gvf section`, run as a user runs it (the built dist/cli/main.js in a child process): exit codes, the JSON
  * keys, null where a value does not exist, and one clear message naming the option for each bad input.
  */
-import { spawnSync } from 'node:child_process';
-import { mkdtempSync, writeFileSync } from 'node:fs';
-import { tmpdir } from 'node:os';
-import { join } from 'node:path';
 import { beforeAll, describe, expect, it } from 'vitest';
 import { assertInDelta, assertRelative } from '../helpers/assert.js';
+import { packagesLoaded } from '../helpers/packages.js';
 import { ensureBuilt, gvf, mainJs } from './built.js';
 
 beforeAll(() => ensureBuilt(), 300_000);
@@ -157,14 +154,8 @@ describe('gvf section', () => {
   });
 
   it('gvf section loads no package but commander (no schema library, no charting stack: a fast cold start)', () => {
-    // a resolve hook lists every package the process loads (Node's module.register, Node ≥ 20.6)
-    const hook = join(mkdtempSync(join(tmpdir(), 'gvf-trace-')), 'trace.mjs');
-    const resolver = `export async function resolve(s, c, next) { const r = await next(s, c);
-      const m = /node_modules\\/((@[^/]+\\/)?[^/]+)/.exec(r.url); if (m) process.stderr.write('package ' + m[1] + '\\n'); return r; }`;
-    writeFileSync(hook, `import { register } from 'node:module';\nregister('data:text/javascript,' + encodeURIComponent(${JSON.stringify(resolver)}));\n`);
-    const run = spawnSync(process.execPath, ['--import', hook, mainJs, 'section', ...rectangle, '--json'], { encoding: 'utf8' });
+    const run = packagesLoaded([mainJs, 'section', ...rectangle, '--json']);
     expect(run.status).toBe(0);
-    const packages = new Set(run.stderr.split('\n').filter((l) => l.startsWith('package ')).map((l) => l.slice(8)));
-    expect([...packages]).toEqual(['commander']);
+    expect(run.packages).toEqual(['commander']);
   });
 });
