@@ -1,6 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { sensitivityAnalysis } from '../../src/analysis/sensitivity.js';
 import { sensitivityCases } from '../../src/analysis/variation.js';
+import { readModelFile } from '../../src/input/model/parse.js';
 import { runModel } from '../../src/run.js';
 import { assertInDelta } from '../helpers/assert.js';
 import { manningRectangleDepth, steepToMildModel, twoReachModel, uniformModel } from './models.js';
@@ -98,5 +99,37 @@ describe('sensitivityAnalysis', () => {
     expect(flow.jumpToeRange!.lowest).toBeLessThan(baseToe);
     expect(flow.jumpToeRange!.highest).toBeGreaterThan(baseToe);
     expect(flow.notes.some((n) => n.startsWith('n +20 %: the jump toe moves from station'))).toBe(true);
+  });
+});
+
+describe('sensitivityAnalysis(surveyed reaches)', () => {
+  it('sensitivityAnalysis(samples/survey-drain, n ±20 %) opens a band between a fixed stage and a critical control, rougher higher on the mild reach', () => {
+    // every surveyed section's n (and every interpolated one's) times 0.8 and 1.2. The band must be shut where
+    // roughness cannot move the water: at the pool's fixed stage (station 0) and at the upstream critical-depth
+    // control (station 400: critical depth, Q²·T/(g·A³) = 1 with α, involves no roughness, and α is unchanged
+    // when every zone's n is scaled alike; Chow 1959 §2-8 and §3-2, from memory). On the mild lower reach the
+    // flow is subcritical and held from downstream, so a rougher channel stands higher (Sf grows with n², and
+    // the standard step carries the difference upstream: common practice)
+    const file = 'samples/survey-drain/model.json';
+    const model = readModelFile(file);
+    const { sensitivity, base } = sensitivityAnalysis(model, [{ parameter: 'n', percent: 20 }], { run: { modelFile: file } });
+    expect(sensitivity.cases.map((c) => [c.label, c.computed])).toEqual([['base', true], ['n −20 %', true], ['n +20 %', true]]);
+    expect(sensitivity.warnings).toEqual([]);
+    sensitivity.flows.forEach((flow, i) => {
+      const baseFlow = base.result.flows[i]!;
+      expect(flow.stations).toHaveLength(baseFlow.stations.length);
+      for (const e of flow.stations) {
+        expect(e.low).toBeLessThanOrEqual(e.base);
+        expect(e.high).toBeGreaterThanOrEqual(e.base);
+      }
+      const at = (station: number) => flow.stations.find((e) => e.station === station)!;
+      expect(at(0).range, `${flow.id} at the pool`).toBeLessThan(1e-9);
+      expect(at(400).range, `${flow.id} at the critical control`).toBeLessThan(1e-6);
+      const lower = flow.stations.filter((e) => e.station > 0 && e.station <= 320).sort((a, b) => a.station - b.station);
+      expect(lower.length).toBeGreaterThan(10);
+      for (const e of lower) expect([e.lowCase, e.highCase], `${flow.id} at ${e.station}`).toEqual(['n −20 %', 'n +20 %']);
+      // a band of centimetres at the reach junction: the multiplier reached the surveyed and interpolated sections
+      expect(at(320).range, `${flow.id} at 320`).toBeGreaterThan(0.05);
+    });
   });
 });
