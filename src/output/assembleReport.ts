@@ -14,9 +14,12 @@
  *   toe of a hydraulic jump (largest discharge first), otherwise at the downstream end of the first flow;
  * - a rating curve (stage against discharge) when two or more discharges run, at the upstream end, at each
  *   structure and at the picked stations.
+ * With a sensitivity run, the profile also shows each flow's range of water surface as a band, and the report
+ * gets a short table of the widest range in each reach, with its station.
  * Pure and deterministic: no clock, no randomness; chart names come from stations and ids.
  */
 import type { TopLevelSpec } from 'vega-lite';
+import type { Sensitivity } from '../analysis/sensitivity.js';
 import { HydraulicError } from '../core/errors.js';
 import { programName, programVersion } from '../core/version.js';
 import type { HydraulicSection } from '../hydraulics/hydraulicSection.js';
@@ -31,7 +34,7 @@ import { lengthUnit } from './charts/style.js';
 import { energyForceSamples } from './assemble/energyForceCurves.js';
 import { reportInputsOf } from './assemble/inputsEcho.js';
 import { sectionGround } from './assemble/sectionGround.js';
-import type { ReportControl, ReportInput, ReportValue } from './report/html.js';
+import type { ReportControl, ReportInput, ReportRange, ReportSensitivity, ReportValue } from './report/html.js';
 
 export interface ReportOptions {
   /** stations (in the user's stationing) to draw cross-sections at, besides every structure */
@@ -40,6 +43,8 @@ export interface ReportOptions {
   energyAt?: { station: number; flow?: string };
   /** the model file as the user named it (shown in the report header) */
   modelFile?: string;
+  /** a sensitivity run over this run (`gvf run --sensitivity`): its range is drawn on the profile and tabled */
+  sensitivity?: Sensitivity;
 }
 
 export interface PlannedChart {
@@ -68,6 +73,9 @@ const outlineHeadroom = 1.25;
 const stationMatch = 1e-9;
 /** Two water levels at one station closer than this are drawn as one. */
 const levelMatch = 1e-6;
+
+/** Reaches listed per flow in the report's sensitivity table (the widest ranges). */
+const widestReaches = 6;
 
 /** Characters of a chart title that fit across the profile chart at the title font. */
 const profileTitleLimit = 72;
@@ -352,6 +360,44 @@ function methodOf(run: ModelRun): NonNullable<ReportInput['method']> {
   return method;
 }
 
+/** "n ±20 %, Q ±10 %": what a sensitivity run varied. */
+function variedText(s: Sensitivity): string {
+  return s.variations.map((v) => `${v.parameter} ±${v.percent} %`).join(', ');
+}
+
+/**
+ * The sensitivity as the report shows it: per flow, the widest range of water surface in each reach and where
+ * it occurs (a station already listed for the reach upstream is not listed again; at most `limit` reaches, the
+ * widest, in station order), where the jump toe wanders, and what changes between cases.
+ */
+export function reportSensitivity(s: Sensitivity, flows: readonly FlowResult[], limit = widestReaches): ReportSensitivity {
+  const out: ReportSensitivity['flows'] = [];
+  for (const f of s.flows) {
+    const flow = flows.find((x) => x.id === f.id);
+    if (!flow) continue;
+    const entries = f.stations.filter((e) => Number.isFinite(e.range) && Number.isFinite(e.station));
+    const picked: ReportRange[] = [];
+    for (const reach of flow.reaches) {
+      const lo = Math.min(reach.from, reach.to) - stationMatch;
+      const hi = Math.max(reach.from, reach.to) + stationMatch;
+      const inside = entries
+        .filter((e) => e.station >= lo && e.station <= hi && !picked.some((p) => Math.abs(p.station - e.station) <= stationMatch))
+        .sort((a, b) => b.range - a.range || a.station - b.station);
+      const e = inside[0];
+      if (e) picked.push({ reach: reach.id, station: e.station, base: e.base, low: e.low, high: e.high, range: e.range, lowCase: e.lowCase, highCase: e.highCase });
+    }
+    const kept = [...picked].sort((a, b) => b.range - a.range || a.station - b.station).slice(0, limit);
+    out.push({
+      id: f.id,
+      widest: picked.filter((p) => kept.includes(p)),
+      reaches: flow.reaches.length,
+      jumpToeRange: f.jumpToeRange,
+      notes: [...f.notes],
+    });
+  }
+  return { varied: variedText(s), computed: s.cases.filter((c) => c.computed).length, cases: s.cases.length, flows: out, warnings: [...s.warnings] };
+}
+
 /** The report of a run: inputs, controls, method, and the charts to draw. */
 export function assembleReport(run: ModelRun, options: ReportOptions = {}): AssembledReport {
   const result = run.result;
@@ -364,10 +410,22 @@ export function assembleReport(run: ModelRun, options: ReportOptions = {}): Asse
     const largest = [...flowsDrawn].sort((a, b) => b.discharge - a.discharge)[0]!;
     const guideFlows = flowsDrawn.length <= guideFlowLimit ? flowsDrawn.map((f) => f.id) : [largest.id];
     const structures = structuresOf(run);
+    const sensitivity = options.sensitivity;
+    const bands = (sensitivity?.flows ?? [])
+      .filter((f) => flowsDrawn.some((d) => d.id === f.id))
+      .map((f) => ({ flow: f.id, label: `Range of water surface, ${f.id}`, rows: f.stations.map((e) => ({ station: e.station, low: e.low, high: e.high })) }));
+    const profileSpec = profileChart(result, { guideFlows, structures, title: profileTitle(result), ...(bands.length ? { bands } : {}) });
+    const unlabelled = ((profileSpec as { datasets?: { unlabelled?: unknown[] } }).datasets?.unlabelled ?? []).length;
+    const bandWords = bands.length && sensitivity
+      ? ` The pale band along each flow's water surface spans the lowest to the highest water surface met when ${variedText(sensitivity)} are varied; the stations where it is widest are tabled under Sensitivity of the water surface.`
+      : '';
+    const labelWords = unlabelled
+      ? ` ${unlabelled === 1 ? 'One stretch is' : `${unlabelled} stretches are`} too short or too crowded to carry a label on the chart; every profile type is listed in the reach table of its flow.`
+      : '';
     charts.push({
       name: uniqueName('profile', taken),
-      caption: `Longitudinal profile: channel bed, water surface of each flow, ${guideFlows.length === flowsDrawn.length ? '' : `for flow ${largest.id} `}the energy line and the critical-depth and normal-depth lines of each reach, ${structures.length ? 'structures, ' : ''}hydraulic jumps (toe and roller length) and the profile type of each stretch. Stations in ${u}.`,
-      spec: profileChart(result, { guideFlows, structures, title: profileTitle(result) }),
+      caption: `Longitudinal profile: channel bed, water surface of each flow, ${guideFlows.length === flowsDrawn.length ? '' : `for flow ${largest.id} `}the energy line and the critical-depth and normal-depth lines of each reach, ${structures.length ? 'structures, ' : ''}hydraulic jumps (toe and roller length) and the profile type of each stretch. Stations in ${u}.${bandWords}${labelWords}`,
+      spec: profileSpec,
     });
 
     const picked = [...new Set((options.sections ?? []).filter(Number.isFinite))];
@@ -412,6 +470,7 @@ export function assembleReport(run: ModelRun, options: ReportOptions = {}): Asse
     controls: controlsOf(result),
     method: methodOf(run),
     ...(options.modelFile === undefined ? {} : { modelFile: options.modelFile }),
+    ...(options.sensitivity === undefined ? {} : { sensitivity: reportSensitivity(options.sensitivity, result.flows) }),
   };
   return { report, charts, notes };
 }

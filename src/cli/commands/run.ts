@@ -3,11 +3,13 @@
  * with `--out DIR`, also write the report, result.json, stations.csv and the charts into DIR (report stack
  * loaded only then). A progress bar shows on stderr when it is a terminal.
  */
+import type { Sensitivity } from '../../analysis/sensitivity.js';
 import { InputError, type Problem } from '../../core/errors.js';
 import { FlagReader } from '../../input/model/flags.js';
 import { ModelFileError } from '../../input/model/validate.js';
 import { readModelFile } from '../../input/model/parse.js';
 import { MethodName } from '../../input/model/types.js';
+import type { RunResult } from '../../results/types.js';
 import { runModel } from '../../run.js';
 import { type Streams, exitCode } from '../print.js';
 import { type ProgressStream, createProgress } from '../progress.js';
@@ -105,8 +107,11 @@ export async function runCommand(path: string, options: RunOptions, streams: Str
     const charts = createProgress(progressStream);
     let written;
     try {
+      // a sensitivity run (--sensitivity) is drawn on the report's profile and tabled in the report
+      const sensitivity = (run.result as RunResult & { sensitivity?: Sensitivity }).sensitivity;
       written = await writeRunOutputs(options.out, run, {
         ...(sections === undefined ? {} : { sections }),
+        ...(sensitivity === undefined ? {} : { sensitivity }),
         ...(energyAt === undefined ? {} : { energyAt: { station: energyAt, ...(options.energyFlow === undefined ? {} : { flow: options.energyFlow }) } }),
         modelFile: path,
         onProgress: (done, total, label) => charts.update(done, total, label),

@@ -3,7 +3,8 @@
  * - `--flows flows.csv` (id, discharge[, downstream stage]) replaces the model's flows (analysis/batch.ts);
  * - `--sensitivity n=±20%,Q=±10%` runs the varied cases after the base run (analysis/sensitivity.ts), adds
  *   `sensitivity` to the result (so `--json` and result.json carry it), prints the envelope table and, with
- *   `--out DIR`, writes sensitivity.csv and the profile chart with the range drawn as a band.
+ *   `--out DIR`, writes sensitivity.csv and the profile chart with the range drawn as a band (report.html, written
+ *   by the run command, shows the band on its own profile and tables the widest range of each reach).
  * A progress bar for the cases shows on stderr when it is a terminal.
  */
 import { flowBatch } from '../../analysis/batch.js';

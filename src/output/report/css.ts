@@ -1,8 +1,8 @@
 /**
  * The report's stylesheet, inline in the page (no network). Screen: a centred column with a dark header band.
  * Print: the content fits both A4 (210 × 297 mm) and US Letter (8.5 × 11 in) within the margins below, so one
- * file prints on either; `paper` fixes the page size when the user wants one. Figures, summary cards and table
- * rows are never split across pages; table headers repeat on each page; the station tables start a new page.
+ * file prints on either; `paper` fixes the page size when the user wants one. Figures, summary cards, table
+ * rows and the short sensitivity table are never split across pages; table headers repeat on each page; the station tables start a new page.
  */
 import { palette } from '../charts/style.js';
 
@@ -63,6 +63,7 @@ tbody tr:nth-child(even) td { background: #f7f9fb; }
 td.fail, .fail { color: var(--warn); font-weight: bold; }
 td.pass { color: var(--pass); }
 table.stations { font-size: 11px; }
+table.sensitivity td:nth-child(8), table.sensitivity td:nth-child(9) { font-size: 11.5px; }
 table.stations td, table.stations th { padding: 2px 5px; }
 figure.chart { margin: 14px 0 22px; }
 figure.chart svg { display: block; max-width: 100%; height: auto; margin: 0 auto; }
@@ -81,7 +82,7 @@ footer { padding: 12px 32px 24px; font-size: 12px; color: var(--muted); border-t
   main, footer { padding-left: 0; padding-right: 0; }
   nav.toc { display: none; }
   h2, h3, h4, h5 { break-after: avoid; page-break-after: avoid; }
-  figure.chart, .card, .cautions, .caution-strip, tr { break-inside: avoid; page-break-inside: avoid; }
+  figure.chart, .card, .cautions, .caution-strip, tr, table.sensitivity { break-inside: avoid; page-break-inside: avoid; }
   thead { display: table-header-group; }
   section.part.stations { break-before: page; page-break-before: always; }
   .flow { border: none; padding: 0; }

@@ -1,8 +1,9 @@
 /**
  * The run report: one self-contained HTML file (inline CSS and SVG, no network, prints on A4 or Letter).
  *
- *   header band (title, units, method, version) → caution strip → 1 summary per flow → 2 charts →
- *   3 inputs echoed → 4 station tables → 5 warnings → 6 method and accuracy → 7 cautions → footer
+ *   header band (title, units, method, version) → caution strip → summary per flow → charts →
+ *   [sensitivity of the water surface, after a sensitivity run] → inputs echoed → station tables → warnings →
+ *   method and accuracy → cautions → footer   (parts numbered in this order)
  *
  * Pure: buildReport takes the run, the inputs as label/value rows (the results layer fills them), the charts
  * as SVG strings, and returns the page as a string. All user text is escaped.
@@ -55,6 +56,42 @@ export interface ReportControl {
   description: string;
 }
 
+/** The widest water-surface range of one reach in a sensitivity run, at its station. */
+export interface ReportRange {
+  reach: string;
+  station: number;
+  /** water surface of the base case */
+  base: number;
+  low: number;
+  high: number;
+  range: number;
+  /** the cases that gave the lowest and the highest water surface */
+  lowCase: string;
+  highCase: string;
+}
+
+/** A sensitivity run as the report shows it (numbers from src/analysis/sensitivity.ts, picked by assembleReport). */
+export interface ReportSensitivity {
+  /** what was varied, in words: "n ±20 %, Q ±10 %" */
+  varied: string;
+  /** cases computed, of all cases run */
+  computed: number;
+  cases: number;
+  flows: {
+    id: string;
+    /** the widest range of each reach, in station order (at most a few reaches: the widest) */
+    widest: ReportRange[];
+    /** reaches of the flow (more than `widest` lists when some were left out) */
+    reaches: number;
+    /** where the jump toe lies over every case, when some case has a jump */
+    jumpToeRange: { lowest: number; highest: number } | null;
+    /** profile types or jumps that change between cases, in words */
+    notes: string[];
+  }[];
+  /** cases that could not be computed, and why */
+  warnings: string[];
+}
+
 export interface ReportInput {
   run: RunResult;
   inputs: ReportInputs;
@@ -66,6 +103,8 @@ export interface ReportInput {
   modelFile?: string;
   /** page size for printing; 'auto' (default) fits both A4 and Letter */
   paper?: Paper;
+  /** the range of water surface over a sensitivity run's cases, when one was made */
+  sensitivity?: ReportSensitivity;
 }
 
 /** The caution every report carries, whatever the run adds. */
@@ -239,6 +278,45 @@ ${table(
 )}`;
 }
 
+/** The sensitivity part: what was varied, then each flow's widest range per reach in one short table. */
+function sensitivityPart(run: RunResult, s: ReportSensitivity): string {
+  const u = lengthUnit(run);
+  const fewer = s.flows.some((f) => f.widest.length < f.reaches);
+  const intro = `<p>Every flow was computed again for each combination of ${h(s.varied)} about the model's values (${s.computed} of ${s.cases} cases computed, the model itself among them). At each output station the band on the profile chart reaches from the lowest to the highest water surface of these cases. The table gives the widest range in each reach${fewer ? ' (for a flow through many reaches, only the reaches where it is widest)' : ''} and the station where it occurs; the widest of each flow is in bold.</p>`;
+  const rows = s.flows.flatMap((f) => {
+    if (f.widest.length === 0) return [[h(f.id), '—', '—', '—', '—', '—', '—', 'no computed station', '']];
+    const top = f.widest.reduce((m, w) => (w.range > m.range ? w : m), f.widest[0]!);
+    return f.widest.map((w, i) => {
+      const bold = (text: string) => (w === top ? `<b>${text}</b>` : text);
+      return [
+        i === 0 ? `<b>${h(f.id)}</b>` : '',
+        h(w.reach),
+        num(w.station, 2),
+        num(w.base),
+        num(w.low),
+        num(w.high),
+        `<td class="n">${bold(num(w.range))}</td>`,
+        h(w.lowCase),
+        h(w.highCase),
+      ];
+    });
+  });
+  const widest = table(
+    ['Flow', 'Reach', `Station (${h(u)})`, `Model water surface (${h(u)})`, `Lowest (${h(u)})`, `Highest (${h(u)})`, `Range (${h(u)})`, 'Lowest in case', 'Highest in case'],
+    rows,
+    { numeric: [false, false, true, true, true, true, true, false, false], cls: 'sensitivity' },
+  );
+  const changes = s.flows.flatMap((f) => [
+    ...(f.jumpToeRange ? [`<li><b>${h(f.id)}:</b> ${h(`over all cases the jump toe lies between stations ${num(f.jumpToeRange.lowest, 2)} and ${num(f.jumpToeRange.highest, 2)} ${u}`)}</li>`] : []),
+    ...f.notes.map((n) => `<li><b>${h(f.id)}:</b> ${h(n)}</li>`),
+  ]);
+  const changeHtml = changes.length
+    ? `<h4>What changes between cases</h4><ul class="plain">${changes.join('')}</ul>`
+    : '<p class="empty">No case changes a profile type or a hydraulic jump.</p>';
+  const warnings = s.warnings.length ? `<ul class="warnings">${s.warnings.map((w) => `<li>${h(w)}</li>`).join('')}</ul>` : '';
+  return `${intro}\n${widest}\n${changeHtml}${warnings}`;
+}
+
 function part(n: number, id: string, title: string, body: string, extraClass = ''): string {
   return `<section class="part${extraClass ? ` ${extraClass}` : ''}" id="${id}"><h2><span class="num">${n}</span>${h(title)}</h2>\n${body}\n</section>`;
 }
@@ -284,14 +362,14 @@ export function buildReport(input: ReportInput): string {
     ? table(['Setting', 'Value'], input.method.settings.map((s) => [h(s.label), h(valueText(s.value, s.unit))]))
     : '';
 
-  const parts = [
-    part(1, 'summary', 'Summary by flow', run.flows.length ? run.flows.map((f, i) => flowSummary(run, f, i, controls)).join('\n') : '<p class="empty">No flow was run.</p>'),
-    part(2, 'charts', 'Charts', chartHtml),
-    part(
-      3,
-      'inputs',
-      'Inputs',
-      [
+  const sections: { id: string; title: string; body: string; cls?: string }[] = [
+    { id: 'summary', title: 'Summary by flow', body: run.flows.length ? run.flows.map((f, i) => flowSummary(run, f, i, controls)).join('\n') : '<p class="empty">No flow was run.</p>' },
+    { id: 'charts', title: 'Charts', body: chartHtml },
+    ...(input.sensitivity ? [{ id: 'sensitivity', title: 'Sensitivity of the water surface', body: sensitivityPart(run, input.sensitivity), cls: 'sensitivity' }] : []),
+    {
+      id: 'inputs',
+      title: 'Inputs',
+      body: [
         inputGroup('Sections', inputs.sections),
         inputGroup('Reaches', inputs.reaches),
         inputGroup('Structures', inputs.structures),
@@ -299,14 +377,15 @@ export function buildReport(input: ReportInput): string {
         inputGroup('Flows', inputs.flows),
         ...(inputs.other ?? []).map((g) => inputGroup(g.heading, g.items)),
       ].join('\n'),
-    ),
-    part(4, 'stations', 'Station tables', run.flows.map((f) => stationTable(run, f)).join('\n') || '<p class="empty">No stations.</p>', 'stations'),
-    part(5, 'warnings', 'Warnings', warningsHtml),
-    part(6, 'method', 'Method and accuracy', `<p>${h(description)}</p><p>${h(accuracy)}</p>${settings}<p>Stations are in ${h(u)}, measured as given in the model; elevations and depths in ${h(u)}.</p>`),
-    part(7, 'cautions', 'Cautions', `<div class="cautions"><ul class="plain">${cautions.map((c) => `<li>${h(c)}</li>`).join('')}</ul></div>`),
+    },
+    { id: 'stations', title: 'Station tables', body: run.flows.map((f) => stationTable(run, f)).join('\n') || '<p class="empty">No stations.</p>', cls: 'stations' },
+    { id: 'warnings', title: 'Warnings', body: warningsHtml },
+    { id: 'method', title: 'Method and accuracy', body: `<p>${h(description)}</p><p>${h(accuracy)}</p>${settings}<p>Stations are in ${h(u)}, measured as given in the model; elevations and depths in ${h(u)}.</p>` },
+    { id: 'cautions', title: 'Cautions', body: `<div class="cautions"><ul class="plain">${cautions.map((c) => `<li>${h(c)}</li>`).join('')}</ul></div>` },
   ];
-  const toc = ['Summary by flow', 'Charts', 'Inputs', 'Station tables', 'Warnings', 'Method and accuracy', 'Cautions'];
-  const ids = ['summary', 'charts', 'inputs', 'stations', 'warnings', 'method', 'cautions'];
+  const parts = sections.map((p, i) => part(i + 1, p.id, p.title, p.body, p.cls));
+  const toc = sections.map((p) => p.title);
+  const ids = sections.map((p) => p.id);
 
   return `<!DOCTYPE html>
 <html lang="en">
