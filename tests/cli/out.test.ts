@@ -6,39 +6,20 @@
  * The models are invented scenarios (tests/output/runFixtures.ts).
  */
 import { spawnSync } from 'node:child_process';
-import { existsSync, mkdirSync, mkdtempSync, readFileSync, readdirSync, writeFileSync } from 'node:fs';
-import { tmpdir } from 'node:os';
+import { existsSync, mkdirSync, readFileSync, writeFileSync } from 'node:fs';
 import { join } from 'node:path';
 import { beforeAll, describe, expect, it } from 'vitest';
+import { filesIn, pngSize, scratchFolder } from '../helpers/outputFolder.js';
 import { chuteModelText } from '../output/runFixtures.js';
 import { ensureBuilt, gvf, mainJs, root } from './built.js';
 
 beforeAll(() => ensureBuilt(), 300_000);
 
-const scratch = () => mkdtempSync(join(tmpdir(), 'gvf-cli-out-'));
+const scratch = () => scratchFolder('gvf-cli-out-');
 function model(dir: string, overrides: Record<string, unknown> = {}): string {
   const path = join(dir, 'model.json');
   writeFileSync(path, chuteModelText(overrides));
   return path;
-}
-
-function pngSize(png: Buffer): { width: number; height: number } {
-  // PNG (W3C 2nd ed. 2003): signature, then IHDR with big-endian width and height at bytes 16 and 20
-  expect(png.subarray(1, 4).toString('ascii')).toBe('PNG');
-  return { width: png.readUInt32BE(16), height: png.readUInt32BE(20) };
-}
-
-function files(dir: string): Map<string, Buffer> {
-  const out = new Map<string, Buffer>();
-  const walk = (sub: string) => {
-    for (const e of readdirSync(join(dir, sub), { withFileTypes: true })) {
-      const rel = sub ? `${sub}/${e.name}` : e.name;
-      if (e.isDirectory()) walk(rel);
-      else out.set(rel, readFileSync(join(dir, rel)));
-    }
-  };
-  walk('');
-  return out;
 }
 
 describe('gvf run MODEL --out DIR', () => {
@@ -49,7 +30,7 @@ describe('gvf run MODEL --out DIR', () => {
     expect(run.code).toBe(0);
     expect(run.stderr).toBe(''); // no progress bar: stderr is a pipe here
     expect(run.stdout).toContain(`report written to ${join(out, 'report.html')}`);
-    const written = files(out);
+    const written = filesIn(out);
     for (const name of ['report.html', 'result.json', 'stations.csv', 'charts/profile.svg', 'charts/profile.png', 'charts/profile.vl.json', 'charts/section-at-120.png', 'charts/rating.png']) {
       expect(written.has(name), name).toBe(true);
       expect(written.get(name)!.length, name).toBeGreaterThan(100);
@@ -69,8 +50,8 @@ describe('gvf run MODEL --out DIR', () => {
     const b = join(work, 'b');
     expect(gvf(['run', model(work), '--out', a]).code).toBe(0);
     expect(gvf(['run', model(work), '--out', b]).code).toBe(0);
-    const fa = files(a);
-    const fb = files(b);
+    const fa = filesIn(a);
+    const fb = filesIn(b);
     expect([...fa.keys()].sort()).toEqual([...fb.keys()].sort());
     for (const [name, bytes] of fa) {
       // the report names the model file given, which is the same path here, so it too is identical
@@ -97,7 +78,7 @@ describe('gvf run MODEL --out DIR', () => {
     const work = scratch();
     const out = join(work, 'out');
     expect(gvf(['run', model(work), '--out', out]).code).toBe(0);
-    const before = files(out);
+    const before = filesIn(out);
     const bad = join(work, 'bad.json');
     writeFileSync(bad, chuteModelText({ reaches: [{ id: 'x', section: 'chute', length: -5, slope: 0.01 }] }));
     const cases = [
@@ -112,7 +93,7 @@ describe('gvf run MODEL --out DIR', () => {
       expect(r.stderr).not.toMatch(/\n\s+at /); // no stack trace
     }
     expect(gvf(cases[2]!).stderr).toContain('--sections: station 9999 is outside the channel');
-    const after = files(out);
+    const after = filesIn(out);
     expect([...after.keys()].sort()).toEqual([...before.keys()].sort());
     for (const [name, bytes] of before) expect(after.get(name)!.equals(bytes), name).toBe(true);
   });

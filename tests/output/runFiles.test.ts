@@ -4,35 +4,16 @@
  * byte for byte, and the same run gives the same bytes. PNG sizes are read as the PNG specification lays
  * the header out (W3C PNG 2nd ed. 2003 / ISO/IEC 15948: IHDR width and height, big-endian, at bytes 16 and 20).
  */
-import { existsSync, mkdtempSync, readFileSync, readdirSync, writeFileSync } from 'node:fs';
-import { tmpdir } from 'node:os';
+import { existsSync, readFileSync, readdirSync, writeFileSync } from 'node:fs';
 import { join } from 'node:path';
 import { describe, expect, it } from 'vitest';
 import { renderChart } from '../../src/output/render.js';
 import { manifestName, resultJson, runFiles, writeRunOutputs } from '../../src/output/runFiles.js';
 import { size } from '../../src/output/charts/style.js';
+import { filesIn, pngSize, scratchFolder } from '../helpers/outputFolder.js';
 import { chuteRun } from './runFixtures.js';
 
-function pngSize(png: Buffer): { width: number; height: number } {
-  expect([...png.subarray(0, 8)]).toEqual([0x89, 0x50, 0x4e, 0x47, 0x0d, 0x0a, 0x1a, 0x0a]);
-  expect(png.subarray(12, 16).toString('ascii')).toBe('IHDR');
-  return { width: png.readUInt32BE(16), height: png.readUInt32BE(20) };
-}
-
-function snapshot(dir: string): Map<string, Buffer> {
-  const out = new Map<string, Buffer>();
-  const walk = (sub: string) => {
-    for (const e of readdirSync(join(dir, sub), { withFileTypes: true })) {
-      const rel = sub ? `${sub}/${e.name}` : e.name;
-      if (e.isDirectory()) walk(rel);
-      else out.set(rel, readFileSync(join(dir, rel)));
-    }
-  };
-  walk('');
-  return out;
-}
-
-const scratch = () => mkdtempSync(join(tmpdir(), 'gvf-out-'));
+const scratch = () => scratchFolder('gvf-out-');
 
 describe('writeRunOutputs(dir, run)', () => {
   const run = chuteRun();
@@ -40,7 +21,7 @@ describe('writeRunOutputs(dir, run)', () => {
   it('writeRunOutputs(dir, run) writes the report, result.json, stations.csv and each chart as .vl.json, .svg and .png', async () => {
     const dir = scratch();
     const written = await writeRunOutputs(dir, run);
-    const files = snapshot(dir);
+    const files = filesIn(dir);
     const charts = written.charts;
     expect(charts).toContain('profile');
     const expected = ['report.html', 'result.json', 'stations.csv', manifestName, ...charts.flatMap((c) => ['vl.json', 'svg', 'png'].map((x) => `charts/${c}.${x}`))];
@@ -89,7 +70,7 @@ describe('writeRunOutputs(dir, run)', () => {
   it('writeRunOutputs(dir, run) that fails while drawing a chart leaves the previous files byte for byte', async () => {
     const dir = scratch();
     await writeRunOutputs(dir, run);
-    const before = snapshot(dir);
+    const before = filesIn(dir);
     const other = chuteRun({ flows: [{ id: 'other', discharge: 9 }] });
     let calls = 0;
     const failing = async (spec: Parameters<typeof renderChart>[0]) => {
@@ -98,7 +79,7 @@ describe('writeRunOutputs(dir, run)', () => {
     };
     await expect(writeRunOutputs(dir, other, { render: failing })).rejects.toThrow('simulated render failure');
     expect(calls).toBe(3);
-    const after = snapshot(dir);
+    const after = filesIn(dir);
     expect([...after.keys()].sort()).toEqual([...before.keys()].sort());
     for (const [name, bytes] of before) expect(after.get(name)!.equals(bytes), name).toBe(true);
   });
