@@ -82,7 +82,7 @@ export function buildProgram(streams: Streams, setCode: (code: number) => void):
     .option('--allow-outside', "let a model's survey files lie outside the model's folder (only for a model you trust)")
     .option('--no-interpolate', 'do not insert interpolated sections between surveyed ones (the accuracy goal is then not checked)')
     .option('--out <dir>', 'write report.html, result.json, stations.csv and charts/ into this folder')
-    .option('--sections <stations>', 'with --out: cross-section charts at these stations (comma-separated)')
+    .option('--sections <stations>', "with --out: cross-section charts at these stations (comma-separated; replaces the model's sectionChartsAt)")
     .option('--energy-at <station>', 'with --out: the specific-energy and specific-force diagram at this station')
     .option('--energy-flow <id>', 'with --out: the flow of that diagram (default: the first flow)')
     .option('--flows <file>', 'CSV of flows (id, discharge[, downstream stage]) replacing the model\'s flows')

@@ -8,8 +8,8 @@
  * Charts drawn:
  * - one longitudinal profile of every flow (guide lines for every flow when there are at most three,
  *   otherwise for the largest discharge only, so the key stays readable);
- * - a cross-section at each station the user picks and at every structure; with neither, one at the middle
- *   of each reach (at most four);
+ * - a cross-section at each station the user picks (`options.sections`, else the model's `sectionChartsAt`) and
+ *   at every structure; with neither, one at the middle of each reach (at most four);
  * - a specific-energy and specific-force diagram at the station and flow the user picks; otherwise at the
  *   toe of a hydraulic jump (largest discharge first), otherwise at the downstream end of the first flow;
  * - a rating curve (stage against discharge) when two or more discharges run, at the upstream end, at each
@@ -37,7 +37,7 @@ import { sectionGround } from './assemble/sectionGround.js';
 import type { ReportControl, ReportInput, ReportRange, ReportSensitivity, ReportValue } from './report/html.js';
 
 export interface ReportOptions {
-  /** stations (in the user's stationing) to draw cross-sections at, besides every structure */
+  /** stations (in the user's stationing) to draw cross-sections at, besides every structure (default: the model's sectionChartsAt) */
   sections?: readonly number[];
   /** where to draw the specific-energy and specific-force diagram */
   energyAt?: { station: number; flow?: string };
@@ -428,7 +428,8 @@ export function assembleReport(run: ModelRun, options: ReportOptions = {}): Asse
       spec: profileSpec,
     });
 
-    const picked = [...new Set((options.sections ?? []).filter(Number.isFinite))];
+    // the caller's stations (the CLI's --sections) replace the model file's sectionChartsAt
+    const picked = [...new Set((options.sections ?? run.stages.model.sectionChartsAt ?? []).filter(Number.isFinite))];
     const range = stationRange(result);
     const sectionStations: { station: number; label: string; why: string; name: string }[] = [];
     for (const x of picked) sectionStations.push({ station: x, label: `Station ${stationText(x)} ${u}`, why: 'station picked', name: `section-at-${stationSlug(x)}` });

@@ -53,6 +53,12 @@ describe('assembleReport(run)', () => {
     }
   });
 
+  it('assembleReport(run) takes the picked stations from the model’s sectionChartsAt, and options.sections replaces them', () => {
+    const keyed = chuteRun({ sectionChartsAt: [120, 300] });
+    expect(assembleReport(keyed).charts.filter((c) => c.name.startsWith('section')).map((c) => c.name)).toEqual(['section-at-120', 'section-at-300']);
+    expect(assembleReport(keyed, { sections: [200] }).charts.filter((c) => c.name.startsWith('section')).map((c) => c.name)).toEqual(['section-at-200']);
+  });
+
   it('assembleReport(run) draws a cross-section at every structure and a rating curve just upstream of it', () => {
     const { charts } = assembleReport(chuteRunWithStructure());
     const names = charts.map((c) => c.name);

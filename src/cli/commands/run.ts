@@ -6,6 +6,8 @@
 import type { Sensitivity } from '../../analysis/sensitivity.js';
 import { InputError, type Problem } from '../../core/errors.js';
 import { FlagReader } from '../../input/model/flags.js';
+import { chartStationOutside } from '../../input/model/messages.js';
+import { isSurveyReach } from '../../input/model/survey.js';
 import { ModelFileError } from '../../input/model/validate.js';
 import { readModelFile } from '../../input/model/parse.js';
 import { MethodName } from '../../input/model/types.js';
@@ -27,7 +29,7 @@ export interface RunOptions extends ReportOptions, RunAnalysisFlags {
   interpolate?: boolean;
   /** output folder for the report, result.json, stations.csv and charts */
   out?: string;
-  /** stations for cross-section charts, comma-separated */
+  /** stations for cross-section charts, comma-separated (replaces the model's sectionChartsAt) */
   sections?: string;
   /** station of the specific-energy and specific-force diagram */
   energyAt?: string;
@@ -101,6 +103,8 @@ export async function runCommand(path: string, options: RunOptions, streams: Str
     progressStream,
   );
 
+  // the model's chart stations on surveyed reaches (numbered by the survey) can be checked only now
+  if (model.sectionChartsAt !== undefined && model.reaches.some(isSurveyReach)) checkModelChartStations(path, run.result, model.sectionChartsAt);
   if (options.out !== undefined) {
     checkStations(run.result.flows, sections, energyAt, options.energyFlow);
     const { writeRunOutputs } = await import('../../output/runFiles.js');
@@ -128,6 +132,20 @@ export async function runCommand(path: string, options: RunOptions, streams: Str
   printRun(run, options, streams);
   await analysis.print(run, options, streams);
   return exitCode.ok;
+}
+
+/** `sectionChartsAt` stations off the computed channel, as problems of the model file (at their JSON paths). */
+function checkModelChartStations(path: string, result: RunResult, stations: readonly number[]): void {
+  const all = result.flows.flatMap((f) => f.stations.map((s) => s.station)).filter(Number.isFinite);
+  if (all.length === 0) return;
+  const lo = Math.min(...all);
+  const hi = Math.max(...all);
+  const unit = result.units === 'US' ? 'ft' : 'm';
+  const problems: Problem[] = [];
+  stations.forEach((x, i) => {
+    if (x < lo || x > hi) problems.push({ where: `sectionChartsAt[${i}]`, message: chartStationOutside(x, lo, hi, unit), value: x });
+  });
+  if (problems.length > 0) throw new ModelFileError(path, problems);
 }
 
 /** Stations asked for charts must lie on the channel, and the flow named must exist: checked before writing. */

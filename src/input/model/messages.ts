@@ -234,6 +234,14 @@ export const structuresTooClose = (other: string): string => `two structures at 
 export const gateWidthNeeded = (shape: string): string =>
   `a sluice gate in a ${shape} channel needs its "width" (the default comes only from a rectangular channel)`;
 
+// ---- report --------------------------------------------------------------------------------------------
+
+export const chartStationOutside = (station: number, from: number, to: number, unit: string): string =>
+  `station ${station} ${unit} lies on no reach: a cross-section chart is drawn on the channel, between stations ${round(from)} and ${round(to)} ${unit}`;
+
+export const chartStationRepeated = (station: number, firstIndex: number): string =>
+  `station ${station} is listed twice (first at index ${firstIndex}); list each station once`;
+
 // ---- command-line flags ------------------------------------------------------------------------------
 
 export const flagRequired = (what: string): string => `required: ${what}`;

@@ -284,6 +284,11 @@ export const modelSchema = z
     structures: z.array(structure).optional().describe('weirs, gates, culverts, drops and spillways along the channel'),
     flowChanges: z.array(flowChange).optional().describe('discharges joining (tributaries, inlets) or leaving the channel at stations'),
     lateralInflow: z.array(lateral).optional().describe('lateral inflow along stretches (side-channel spillway, gutter, collector channel)'),
+    sectionChartsAt: z
+      .array(number)
+      .min(1)
+      .optional()
+      .describe('stations where the report (gvf run --out) draws a cross-section chart, besides every structure; each must lie on the channel; --sections replaces this list'),
   })
   .describe('a gvf model: channel sections, reaches, flows and controls');
 

@@ -297,6 +297,11 @@ export interface Model {
   flowChanges?: FlowChangeSpec[];
   /** lateral inflow along stretches */
   lateralInflow?: LateralInflowSpec[];
+  /**
+   * stations (in the model's stationing) where the report draws a cross-section chart, besides every
+   * structure; the CLI's --sections replaces this list when given
+   */
+  sectionChartsAt?: number[];
 }
 
 /** Defaults filled in by validation; named here so README, schema and code agree. */

@@ -6,6 +6,7 @@
  * The second pass also runs on the parts that passed the first, so one run reports as much as it can.
  */
 import { InputError, type Problem } from '../../core/errors.js';
+import { stationRoundoffFraction } from '../../core/tolerances.js';
 import { largestMagnitude, maxOutputStations, slopeLimit, smallestDischarge } from './limits.js';
 import * as msg from './messages.js';
 import { formatPath, issueMessage, issuesToProblems } from './issues.js';
@@ -125,6 +126,7 @@ function modelRules(raw: Record<string, unknown>, options: ValidateOptions): Pro
   problems.push(...duplicateIds(Array.isArray(raw.flows) ? raw.flows : [], 'flows', 'flow'));
   problems.push(...duplicateIds(Array.isArray(raw.structures) ? raw.structures : [], 'structures', 'structure'));
   problems.push(...flowRules(raw));
+  problems.push(...chartStationRules(raw.sectionChartsAt, prismatic && reaches.length > 0 ? total : undefined, raw.units === 'US' ? 'ft' : 'm'));
 
   // controls that cannot be: a stage at or below the bed, a depth above a conduit's crown
   const downstreamBed = typeof raw.downstreamBedElevation === 'number' ? raw.downstreamBedElevation : 0;
@@ -197,6 +199,30 @@ function flowRules(raw: Record<string, unknown>): Problem[] {
   };
   perFlow(raw.flowChanges, 'addedDischarge', 'flowChanges');
   perFlow(raw.lateralInflow, 'inflowPerLength', 'lateralInflow');
+  return problems;
+}
+
+/**
+ * The stations of `sectionChartsAt`: each listed once and, where every reach is prismatic (stations run from 0
+ * at the upstream end to the total length), on the channel. Surveyed reaches number their own stations, so
+ * those are checked once the survey is read (the run command, against the computed stations).
+ */
+function chartStationRules(list: unknown, length: number | undefined, unit: string): Problem[] {
+  if (!Array.isArray(list)) return [];
+  const problems: Problem[] = [];
+  const first = new Map<number, number>();
+  list.forEach((x, i) => {
+    if (typeof x !== 'number' || !Number.isFinite(x)) return;
+    const where = `sectionChartsAt[${i}]`;
+    const earlier = first.get(x);
+    if (earlier !== undefined) problems.push({ where, message: msg.chartStationRepeated(x, earlier), value: x });
+    else first.set(x, i);
+    // round-off of summed reach lengths is not "off the channel"
+    const slack = length === undefined ? 0 : stationRoundoffFraction * Math.max(1, length);
+    if (length !== undefined && Math.abs(x) <= largestMagnitude && (x < -slack || x > length + slack)) {
+      problems.push({ where, message: msg.chartStationOutside(x, 0, length, unit), value: x });
+    }
+  });
   return problems;
 }
 

@@ -94,7 +94,7 @@ describe('validateModel(json, file)', () => {
     expect(lines(json)).toEqual([
       'reaches[0].lenght: unknown key (did you mean "length"?); the keys allowed here are id, section, length, slope, bankHeight',
       'boundaries.downstream.depth: unknown key; the keys allowed here are type, elevation',
-      'colour: unknown key; the keys allowed here are $schema, title, units, sections, reaches, downstreamBedElevation, flows, boundaries, method, freeboard, frictionAveraging, outputSpacing, description, structures, flowChanges, lateralInflow',
+      'colour: unknown key; the keys allowed here are $schema, title, units, sections, reaches, downstreamBedElevation, flows, boundaries, method, freeboard, frictionAveraging, outputSpacing, description, structures, flowChanges, lateralInflow, sectionChartsAt',
     ]);
   });
 
@@ -269,5 +269,36 @@ describe('validateModel(json, file)', () => {
       (m.sections as Record<string, unknown>)['main channel'] = { shape: 'rectangular', bottomWidth: 0, n: 0.03 };
     });
     expect(lines(json)).toEqual(['sections["main channel"].bottomWidth: expected a number greater than 0, got 0']);
+  });
+});
+
+describe('validateModel(json) sectionChartsAt', () => {
+  // the example's channel: reaches of 90 m and 400 m, so stations run from 0 to 490 m (README: stations run
+  // from the upstream end of the first reach)
+  const withStations = (list: unknown) => edit((m) => Object.assign(m, { sectionChartsAt: list }));
+
+  it('validateModel(json) accepts chart stations on the channel, both ends included', () => {
+    expect(validateModel(withStations([0, 45, 90, 490]), 'model.json').sectionChartsAt).toEqual([0, 45, 90, 490]);
+  });
+
+  it('validateModel(json) refuses a chart station on no reach, naming the channel’s stations', () => {
+    expect(lines(withStations([120, 495.5, -3]))).toEqual([
+      'sectionChartsAt[1]: station 495.5 m lies on no reach: a cross-section chart is drawn on the channel, between stations 0 and 490 m',
+      'sectionChartsAt[2]: station -3 m lies on no reach: a cross-section chart is drawn on the channel, between stations 0 and 490 m',
+    ]);
+  });
+
+  it('validateModel(json) refuses a station listed twice, an empty list and a non-number', () => {
+    expect(lines(withStations([120, 300, 120]))).toEqual(['sectionChartsAt[2]: station 120 is listed twice (first at index 0); list each station once']);
+    expect(lines(withStations([]))).toEqual(['sectionChartsAt: expected at least 1 entry, got 0']);
+    expect(lines(withStations([120, '300']))).toEqual(['sectionChartsAt[1]: expected a number, got "300"']);
+  });
+
+  it('validateModel(json) in US units names stations in feet', () => {
+    const json = withStations([600]) as Record<string, unknown>;
+    json.units = 'US';
+    expect(lines(json)).toEqual([
+      'sectionChartsAt[0]: station 600 ft lies on no reach: a cross-section chart is drawn on the channel, between stations 0 and 490 ft',
+    ]);
   });
 });
