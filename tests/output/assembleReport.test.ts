@@ -39,6 +39,19 @@ describe('assembleReport(run)', () => {
     expect(data.labels!.map((l) => l.text)).toEqual(expect.arrayContaining(['S2', 'S1']));
   });
 
+  it('assembleReport(run) says in the profile caption when a stretch carries no label, and the report table still lists its type', async () => {
+    // the 2-year flow's S1 stretch on the chute is about 5 m of a 400 m profile: narrower than its label
+    const { charts, report } = assembleReport(run);
+    const profile = charts[0]!;
+    const unlabelled = datasets(profile.spec).unlabelled!;
+    expect(unlabelled.map((u) => [u.flow, u.text, u.reason])).toEqual([['2-year', 'S1', 'stretch too short']]);
+    expect(profile.caption).toContain('One stretch is too short or too crowded to carry a label on the chart; every profile type is listed in the reach table of its flow.');
+    const { buildReport } = await import('../../src/output/report/html.js');
+    const html = buildReport({ ...report, charts: [] });
+    const s1 = run.result.flows[0]!.reaches[0]!.profiles.find((p) => p.type === 'S1')!;
+    expect(html).toContain(`<b>S1</b> ${s1.from.toFixed(1)}–${s1.to.toFixed(1)} m`);
+  });
+
   it('assembleReport(run, {sections}) draws the picked stations with each flow\'s water level there', () => {
     const { charts } = assembleReport(run, { sections: [120, 120, 300] });
     const sections = charts.filter((c) => c.name.startsWith('section'));

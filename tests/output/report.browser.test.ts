@@ -2,7 +2,8 @@
  * The report in a real browser: headless Chromium from the Debian package, driven by playwright-core.
  * Opens report.html built from the invented run of ./fixtures.ts with every chart kind, checks each chart's
  * SVG is laid out with non-zero size, that the page logs no error and fetches nothing, that markup in the
- * title shows as text, and that it prints to A4 and Letter; leaves a screenshot in output/.
+ * title shows as text, and that it prints to A4 and Letter (with an invented sensitivity table, the widest
+ * table the report has); leaves a screenshot in output/.
  * Skips, saying why, only when /usr/bin/chromium is absent (.ci/run installs it).
  */
 import { CHROMIUM, hasChromium, launchChromium } from '../helpers/chromium.js';
@@ -50,6 +51,20 @@ describe.skipIf(!hasChromium)(hasChromium ? 'report.html in headless Chromium' :
         { id: 'rating', caption: 'Rating curves (invented data)', svg: charts[3]!.svg },
       ],
       program: { name: 'gvf', version: '0.1.0' },
+      // an invented sensitivity table (the widest table the report prints), so the print checks cover it
+      sensitivity: {
+        varied: 'n ±20 %, Q ±10 %',
+        computed: 9,
+        cases: 9,
+        flows: run.flows.map((f) => ({
+          id: f.id,
+          reaches: 2,
+          widest: f.reaches.map((r, i) => ({ reach: r.id, station: r.from, base: 51.2 + i, low: 50.9 + i, high: 51.6 + i, range: 0.7, lowCase: 'n −20 %, Q −10 %', highCase: 'n +20 %, Q +10 %' })),
+          jumpToeRange: { lowest: 74.5, highest: 86.25 },
+          notes: ['n +20 %: the profile types of reach lower change from M1 to M2 (invented)'],
+        })),
+        warnings: [],
+      },
     });
     reportPath = join(work, 'report.html');
     await writeFile(reportPath, html);

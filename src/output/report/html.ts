@@ -278,6 +278,11 @@ ${table(
 )}`;
 }
 
+/** A case label ("n −20 %, Q +10 %") that wraps only after a comma, never inside "n −20 %". */
+function caseText(label: string): string {
+  return label.split(', ').map((part) => h(part).replace(/ /g, '&nbsp;')).join(', ');
+}
+
 /** The sensitivity part: what was varied, then each flow's widest range per reach in one short table. */
 function sensitivityPart(run: RunResult, s: ReportSensitivity): string {
   const u = lengthUnit(run);
@@ -296,8 +301,8 @@ function sensitivityPart(run: RunResult, s: ReportSensitivity): string {
         num(w.low),
         num(w.high),
         `<td class="n">${bold(num(w.range))}</td>`,
-        h(w.lowCase),
-        h(w.highCase),
+        caseText(w.lowCase),
+        caseText(w.highCase),
       ];
     });
   });
