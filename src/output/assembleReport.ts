@@ -32,7 +32,7 @@ import { ratingChart, type RatingSeries } from './charts/ratingChart.js';
 import { sectionChart } from './charts/sectionChart.js';
 import { lengthUnit } from './charts/style.js';
 import { energyForceSamples } from './assemble/energyForceCurves.js';
-import { reportInputsOf } from './assemble/inputsEcho.js';
+import { reportInputsOf, reportSettingsHeading, sectionChartsItem } from './assemble/inputsEcho.js';
 import { sectionGround } from './assemble/sectionGround.js';
 import type { ReportControl, ReportInput, ReportRange, ReportSensitivity, ReportValue } from './report/html.js';
 
@@ -464,9 +464,15 @@ export function assembleReport(run: ModelRun, options: ReportOptions = {}): Asse
     notes.push('no chart drawn: no flow has computed stations');
   }
 
+  const inputs = reportInputsOf(run.stages.model, result);
+  // stations given by the caller replace the model's list for this report: say so beside the echoed list
+  const listed = inputs.other?.find((g) => g.heading === reportSettingsHeading)?.items.find((i) => i.id === sectionChartsItem);
+  if (listed && options.sections !== undefined) {
+    listed.rows.push({ label: 'Replaced for this report by stations', value: options.sections.map((x) => stationText(x)).join(', ') || 'none', unit: u });
+  }
   const report: Omit<ReportInput, 'charts'> = {
     run: result,
-    inputs: reportInputsOf(run.stages.model, result),
+    inputs,
     program: { name: programName, version: programVersion },
     controls: controlsOf(result),
     method: methodOf(run),

@@ -70,6 +70,11 @@ describe('assembleReport(run)', () => {
     const keyed = chuteRun({ sectionChartsAt: [120, 300] });
     expect(assembleReport(keyed).charts.filter((c) => c.name.startsWith('section')).map((c) => c.name)).toEqual(['section-at-120', 'section-at-300']);
     expect(assembleReport(keyed, { sections: [200] }).charts.filter((c) => c.name.startsWith('section')).map((c) => c.name)).toEqual(['section-at-200']);
+    // the inputs echo the model's list, and say when the caller's stations replaced it
+    const echoed = (options = {}) => assembleReport(keyed, options).report.inputs.other!.find((g) => g.heading === 'Report')!.items[0]!;
+    expect(echoed()).toEqual({ id: 'Cross-section charts', rows: [{ label: 'At stations', value: '120, 300', unit: 'm' }] });
+    expect(echoed({ sections: [200] }).rows[1]).toEqual({ label: 'Replaced for this report by stations', value: '200', unit: 'm' });
+    expect(assembleReport(run).report.inputs.other!.some((g) => g.heading === 'Report')).toBe(false);
   });
 
   it('assembleReport(run) draws a cross-section at every structure and a rating curve just upstream of it', () => {

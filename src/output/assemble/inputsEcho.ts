@@ -55,7 +55,11 @@ function listItems(list: readonly unknown[], units: UnitSystem, what: string): R
 }
 
 /** Keys echoed in their own groups, or in the method settings, or not at all. */
-const grouped = new Set(['$schema', 'title', 'description', 'units', 'sections', 'reaches', 'structures', 'boundaries', 'flows', 'method', 'frictionAveraging', 'outputSpacing', 'downstreamBedElevation']);
+const grouped = new Set(['$schema', 'title', 'description', 'units', 'sections', 'reaches', 'structures', 'boundaries', 'flows', 'method', 'frictionAveraging', 'outputSpacing', 'downstreamBedElevation', 'sectionChartsAt']);
+
+/** The heading and item id under which the model's report settings are echoed. */
+export const reportSettingsHeading = 'Report';
+export const sectionChartsItem = 'Cross-section charts';
 
 export function reportInputsOf(model: Model, run: RunResult): ReportInputs {
   const units = model.units;
@@ -83,6 +87,10 @@ export function reportInputsOf(model: Model, run: RunResult): ReportInputs {
     other.push({ heading: 'About this model', items: [{ id: 'Description', rows: [{ label: 'Text', value: loose.description }] }] });
   }
   other.push({ heading: 'Channel', items: [channel] });
+  if (model.sectionChartsAt !== undefined) {
+    const at = model.sectionChartsAt.map((x) => String(Number(x.toPrecision(6)))).join(', ');
+    other.push({ heading: reportSettingsHeading, items: [{ id: sectionChartsItem, rows: [{ label: 'At stations', value: at, unit: unitWord('length', units) }] }] });
+  }
   for (const [key, v] of Object.entries(loose)) {
     if (grouped.has(key) || v === undefined) continue;
     const heading = labelOf(key);
