@@ -51,9 +51,12 @@ export interface Section {
   /**
    * Optional allocation-free form of `subsections` for the solvers' inner loops: the same subsections, in the
    * same order, written into `out` as [area, wettedPerimeter, topWidth, roughness] each; returns how many.
-   * `out` must hold 4 × subsectionLimit numbers.
+   * `out` must hold 4 × subsectionLimit numbers. When `rates` is given (subsectionLimit numbers), each
+   * subsection's dP/dy is written there too: the rate at which its wetted perimeter grows with depth just above
+   * `depth` (the ground's 1/sin of slope at the water's edges; a section that cannot tell leaves `rates` as it was).
+   * With dA/dy = T it gives the depth derivative of conveyance and α without numerical differencing.
    */
-  subsectionsInto?(depth: number, out: Float64Array): number;
+  subsectionsInto?(depth: number, out: Float64Array, rates?: Float64Array): number;
   /** the most subsections `subsectionsInto` can write (present with it) */
   readonly subsectionLimit?: number;
   /** the defining dimensions, for tables and reports (e.g. { bottomWidth: 3, sideSlopeLeft: 2 }) */

@@ -21,7 +21,7 @@
 import { HydraulicError, NumericalError } from '../core/errors.js';
 import { brentRoot, expandUpward } from '../core/roots.js';
 import type { Section } from '../geometry/section.js';
-import { conveyanceAndAlpha, type HydraulicSection } from './hydraulicSection.js';
+import { conveyanceAndAlpha, conveyanceWithSlopes, type HydraulicSection } from './hydraulicSection.js';
 import {
   depthTolerance,
   extendSectionError,
@@ -31,7 +31,7 @@ import {
   smallestDepth,
   unboundedTop,
 } from './depthSearch.js';
-import { depthTable } from './depthTable.js';
+import { energyCurve } from './energyCurve.js';
 
 /** Shapes with one critical depth for any discharge (A³/T increasing in depth). */
 const singleCriticalShapes: ReadonlySet<string> = new Set(['rectangular', 'trapezoidal', 'triangular', 'circular']);
@@ -80,6 +80,27 @@ export function energyAt(hs: HydraulicSection, y: number, discharge: number): nu
   return y + (alpha * discharge * discharge) / (2 * hs.units.g * e.area * e.area);
 }
 
+/**
+ * dE/dy = 1 − αQ²T/(gA³) + (Q²/2gA²)·dα/dy at depth y, with dα/dy from the subsections' perimeter rates; NaN where
+ * that has no analytic form (the extrema search then minimises E itself).
+ */
+export function energySlopeAt(hs: HydraulicSection, y: number, discharge: number): number {
+  const q2 = discharge * discharge;
+  const g = hs.units.g;
+  let area: number;
+  let topWidth: number;
+  let alpha = constantAlpha(hs);
+  let alphaSlope = 0;
+  if (!hasSingleCriticalDepth(hs.section) && hs.alpha === undefined && hs.section.compound) {
+    // one look-up: the subsections give the area and top width as well
+    const slopes = conveyanceWithSlopes(hs, y);
+    if (slopes === undefined) return NaN;
+    ({ area, topWidth, alpha, alphaSlope } = slopes);
+  } else ({ area, topWidth } = hs.section.elements(y));
+  const a2 = area * area;
+  return 1 - (alpha * q2 * topWidth) / (g * a2 * area) + (q2 * alphaSlope) / (2 * g * a2);
+}
+
 /** The local extrema of specific energy over the section's depth range (minima are the critical depths). */
 export function specificEnergyExtrema(hs: HydraulicSection, discharge: number): Extrema {
   const section = hs.section;
@@ -108,8 +129,9 @@ export function specificEnergyExtrema(hs: HydraulicSection, discharge: number): 
         label(),
         4,
       );
-  const table = depthTable(hs, top, discharge);
-  const extrema = weightedExtrema(section, (y) => energyAt(hs, y, discharge), table.depth, table.depth, table.energyWeight, q2, label);
+  const curve = energyCurve(hs, top, discharge);
+  const slope = { base: 1, weight: curve.slopeWeight, at: (y: number) => energySlopeAt(hs, y, discharge) };
+  const extrema = weightedExtrema(section, (y) => energyAt(hs, y, discharge), curve.depth, curve.depth, curve.weight, q2, label, slope, curve.index);
   if (extrema.minima.length === 0) {
     if (Number.isFinite(section.maxDepth)) throw extendSectionError(section, label());
     throw new HydraulicError(`${label()}: specific energy has no minimum below depth ${top}`);

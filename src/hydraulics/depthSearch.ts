@@ -13,6 +13,7 @@ import {
   minimumDepthFraction,
 } from '../core/tolerances.js';
 import type { Section } from '../geometry/section.js';
+import { type ExtremaIndex, indexedExtrema } from './extremaIndex.js';
 
 /** The shallowest depth a solver looks at (thinner flow counts as dry). */
 export function smallestDepth(section: Section): number {
@@ -139,9 +140,33 @@ export function scannedExtrema(
 const pendingLabel = '\u0000pending label';
 
 /**
+ * The curve's slope df/dy in the same discharge-free form as the curve itself: at the samples
+ * base + q2·weight[i] (NaN where unknown), and exactly at any depth by `at`. With it an extremum is located
+ * as the root of df/dy in the one sample interval where its sign changes (Brent's method, ends already known),
+ * which takes a few evaluations where minimising f takes a few tens (f is flat there).
+ */
+export interface SampledSlope {
+  /** the discharge-free part: one number for every sample, or one per sample */
+  readonly base: number | ArrayLike<number>;
+  readonly weight: ArrayLike<number>;
+  readonly at: (y: number) => number;
+}
+
+/** A refinement's error with its label made now (see pendingLabel). */
+function relabel(error: unknown, what: () => string): unknown {
+  if (error instanceof NumericalError && error.message.startsWith(pendingLabel)) {
+    return new NumericalError(what() + error.message.slice(pendingLabel.length));
+  }
+  return error;
+}
+
+/**
  * scannedExtrema of the sampled curve v[i] = q2·weight[i] + base[i] (specific energy: base = depth,
  * weight = α/(2gA²); specific force: base = Aȳ, weight = 1/(gA)), computed as the scan goes: the same
- * comparisons and refinements as scannedExtrema over those values, with nothing stored.
+ * comparisons as scannedExtrema over those values, with nothing stored. Each sampled extremum is refined in
+ * [x[i−1], x[i+1]]: by the root of the slope where `slope` is given and its sign changes from one side of the
+ * extremum to the other inside that range (a minimum: − to +; a maximum: + to −), otherwise (no slope, or a
+ * jump of the curve, where the sign does not change) by Brent's minimiser.
  */
 export function weightedExtrema(
   section: Section,
@@ -151,6 +176,9 @@ export function weightedExtrema(
   weight: ArrayLike<number>,
   q2: number,
   what: () => string,
+  slope?: SampledSlope,
+  /** the curve's extrema index (hydraulics/extremaIndex.ts): the same extrema as the scan without scanning */
+  index?: ExtremaIndex,
 ): Extrema {
   const minima: number[] = [];
   const maxima: number[] = [];
@@ -158,21 +186,54 @@ export function weightedExtrema(
   const negative = (y: number) => -f(y);
   // the label (it formats the discharge, which costs about as much as a refinement) is made only for a message
   const options = (a: number) => ({ xTolerance: depthTolerance(section, a), what: pendingLabel });
+  /** the extremum sampled at i: the slope's root in the interval beside i where its sign changes, if any */
+  const slopeBase = slope === undefined ? undefined : slope.base;
+  const slopeAt = (i: number): number =>
+    typeof slopeBase === 'number' ? slopeBase + q2 * slope!.weight[i]! : slopeBase![i]! + q2 * slope!.weight[i]!;
+  const refine = (i: number, minimum: boolean): number => {
+    if (slope !== undefined) {
+      const sign = minimum ? 1 : -1;
+      const below = sign * slopeAt(i - 1);
+      const middle = sign * slopeAt(i);
+      const above = sign * slopeAt(i + 1);
+      // on the minimum's side the signed slope rises through 0: below < 0 ≤ middle, or middle < 0 ≤ above
+      const j = below < 0 && middle >= 0 ? i - 1 : middle < 0 && above >= 0 ? i : -1;
+      if (j >= 0) {
+        const a = x[j]!;
+        const b = x[j + 1]!;
+        const fa = slopeAt(j);
+        const fb = slopeAt(j + 1);
+        if (fb === 0) return b;
+        return brentRoot((y) => (y === a ? fa : y === b ? fb : slope.at(y)), a, b, options(a));
+      }
+    }
+    return brentMinimum(minimum ? f : negative, x[i - 1]!, x[i + 1]!, options(x[i - 1]!));
+  };
+  const visit = (i: number, minimum: boolean): void => {
+    if (minimum) minima.push(refine(i, true));
+    else maxima.push(refine(i, false));
+  };
+  if (index !== undefined) {
+    let fallingAtTop: boolean;
+    try {
+      fallingAtTop = indexedExtrema(index, q2, visit);
+    } catch (error) {
+      throw relabel(error, what);
+    }
+    return { minima, maxima, tolerance: minimiserTolerance(section), top: x[n - 1]!, fallingAtTop };
+  }
   let before = n > 0 ? base[0]! + q2 * weight[0]! : NaN;
   let here = n > 1 ? base[1]! + q2 * weight[1]! : NaN;
   try {
     for (let i = 1; i < n - 1; i++) {
       const after = base[i + 1]! + q2 * weight[i + 1]!;
-      if (here < before && here <= after) minima.push(brentMinimum(f, x[i - 1]!, x[i + 1]!, options(x[i - 1]!)));
-      else if (here > before && here >= after) maxima.push(brentMinimum(negative, x[i - 1]!, x[i + 1]!, options(x[i - 1]!)));
+      if (here < before && here <= after) minima.push(refine(i, true));
+      else if (here > before && here >= after) maxima.push(refine(i, false));
       before = here;
       here = after;
     }
   } catch (error) {
-    if (error instanceof NumericalError && error.message.startsWith(pendingLabel)) {
-      throw new NumericalError(what() + error.message.slice(pendingLabel.length));
-    }
-    throw error;
+    throw relabel(error, what);
   }
   return {
     minima,

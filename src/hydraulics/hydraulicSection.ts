@@ -72,6 +72,83 @@ function fromBuffer(hs: HydraulicSection, out: Float64Array, count: number, disc
   return { conveyance: k, alpha };
 }
 
+/** Conveyance and α with their rates of change with depth. */
+export interface ConveyanceSlopes extends ConveyanceResult {
+  /** the flow area and top width as the sums of the subsections' (equal to the section's elements up to round-off) */
+  area: number;
+  topWidth: number;
+  /** dK/dy */
+  conveyanceSlope: number;
+  /** dα/dy (0 where α is fixed or the section has one subsection) */
+  alphaSlope: number;
+}
+
+/** d(ln K)/dy of one subsection per friction law, from dA/dy = T and dP/dy: K ∝ A^a·P^−b (Manning a = 5/3, b = 2/3; Chézy 3/2, 1/2). */
+const logConveyanceExponents: Partial<Record<HydraulicSection['law'], readonly [number, number]>> = {
+  manning: [5 / 3, 2 / 3],
+  chezy: [3 / 2, 1 / 2],
+};
+
+let rateScratch = new Float64Array(8);
+let slopeScratch = new Float64Array(4 * 8);
+
+/**
+ * conveyanceAndAlpha at a depth together with dK/dy and dα/dy, worked out from the subsections' areas, top widths
+ * (dA/dy) and perimeter rates (dP/dy) rather than by differencing: with Si = Ki³/Ai², S = ΣSi and α = S·A²/K³,
+ *   dα/dy = α·(S′/S + 2T/A − 3K′/K),  Si′ = Si·(3Ki′/Ki − 2Ti/Ai),  Ki′ = Ki·(a·Ti/Ai − b·Pi′/Pi)
+ * (the logarithmic derivative of α = Σ(Ki³/Ai²)/(K³/A²), Chow 1959 §6-4's definition). The conveyance and α are
+ * the same sums in the same order as conveyanceAndAlpha's, so energies agree to the last bit. Undefined where the
+ * rates cannot be formed this way: Darcy–Weisbach (K depends on the discharge), or a section that does not
+ * report perimeter rates; callers then difference numerically.
+ */
+export function conveyanceWithSlopes(hs: HydraulicSection, depth: number): ConveyanceSlopes | undefined {
+  const section = hs.section;
+  const exponents = logConveyanceExponents[hs.law];
+  if (exponents === undefined || section.subsectionsInto === undefined || section.subsectionLimit === undefined) return undefined;
+  const limit = section.subsectionLimit;
+  if (slopeScratch.length < 4 * limit) slopeScratch = new Float64Array(4 * limit);
+  if (rateScratch.length < limit) rateScratch = new Float64Array(limit);
+  const out = slopeScratch;
+  const rates = rateScratch;
+  rates.fill(NaN, 0, limit);
+  const count = section.subsectionsInto(depth, out, rates);
+  const [a, b] = exponents;
+  let totalArea = 0;
+  let totalWidth = 0;
+  for (let i = 0; i < count; i++) {
+    totalArea += out[4 * i]!;
+    totalWidth += out[4 * i + 2]!;
+  }
+  let k = 0;
+  let kSlope = 0;
+  let sum = 0;
+  let sumSlope = 0;
+  for (let i = 0; i < count; i++) {
+    const area = out[4 * i]!;
+    const perimeter = out[4 * i + 1]!;
+    const ki = conveyanceOf(area, perimeter, out[4 * i + 3]!, hs.law, hs.units);
+    k += ki;
+    if (ki > 0) {
+      const width = out[4 * i + 2]!;
+      const logSlope = (a * width) / area - (b * rates[i]!) / perimeter;
+      kSlope += ki * logSlope;
+      const si = (ki * ki * ki) / (area * area);
+      sum += si;
+      sumSlope += si * (3 * logSlope - (2 * width) / area);
+    } else if (area > 0) sum += (ki * ki * ki) / (area * area);
+  }
+  let alpha = 1;
+  let alphaSlope = 0;
+  if (hs.alpha !== undefined) alpha = hs.alpha;
+  else if (count > 1 && k > 0 && totalArea > 0) {
+    alpha = sum / ((k * k * k) / (totalArea * totalArea));
+    alphaSlope = alpha * (sumSlope / sum + (2 * totalWidth) / totalArea - (3 * kSlope) / k);
+  }
+  // a section that left a rate unwritten, or a subsection too thin for the ratios: no analytic rates here
+  if (!Number.isFinite(kSlope) || !Number.isFinite(alphaSlope)) return undefined;
+  return { conveyance: k, alpha, area: totalArea, topWidth: totalWidth, conveyanceSlope: kSlope, alphaSlope };
+}
+
 export function conveyance(hs: HydraulicSection, depth: number, discharge?: number): number {
   return conveyanceAndAlpha(hs, depth, discharge).conveyance;
 }

@@ -51,7 +51,26 @@ export function specificForceExtrema(hs: HydraulicSection, discharge: number): E
         4,
       );
   const table = depthTable(hs, top, discharge);
-  const extrema = weightedExtrema(section, (y) => forceAt(hs, y, discharge), table.depth, table.firstMoment, table.forceWeight, q2, () => what);
+  // dM/dy = A − Q²T/(gA²) at the samples and exactly (the slope locates each extremum as its root)
+  const slope = {
+    base: table.area,
+    weight: table.forceSlopeWeight,
+    at: (y: number) => {
+      const e = section.elements(y);
+      return e.area - (q2 * e.topWidth) / (g * e.area * e.area);
+    },
+  };
+  const extrema = weightedExtrema(
+    section,
+    (y) => forceAt(hs, y, discharge),
+    table.depth,
+    table.firstMoment,
+    table.forceWeight,
+    q2,
+    () => what,
+    slope,
+    table.forceIndex,
+  );
   if (extrema.minima.length === 0) {
     if (Number.isFinite(section.maxDepth)) throw extendSectionError(section, what);
     throw new HydraulicError(`${what}: specific force has no minimum below depth ${top}`);

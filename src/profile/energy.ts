@@ -10,7 +10,7 @@
  * and direct steps balance E including α(y), so the ODE must use the same E.
  */
 import { alphaDerivativeStep } from '../core/tolerances.js';
-import { conveyanceAndAlpha, type HydraulicSection } from '../hydraulics/hydraulicSection.js';
+import { conveyanceAndAlpha, conveyanceWithSlopes, type HydraulicSection } from '../hydraulics/hydraulicSection.js';
 
 export interface PointState {
   readonly depth: number;
@@ -70,15 +70,21 @@ function energySlope(hs: HydraulicSection, y: number, discharge: number, a: numb
   const g = hs.units.g;
   const q2 = discharge * discharge;
   let dEdy = 1 - (alpha * q2 * topWidth) / (g * a * a * a);
-  if (alphaVaries(hs)) {
-    // central difference, kept inside the section
-    const h = alphaDerivativeStep * Math.max(y, hs.section.lengthScale);
-    const up = Math.min(y + h, hs.section.maxDepth);
-    const down = Math.max(y - h, 0.5 * y);
-    const dAlpha = (alphaAt(hs, up, discharge) - alphaAt(hs, down, discharge)) / (up - down);
-    dEdy += (q2 / (2 * g * a * a)) * dAlpha;
-  }
+  if (alphaVaries(hs)) dEdy += (q2 / (2 * g * a * a)) * alphaSlopeAt(hs, y, discharge);
   return dEdy;
+}
+
+/**
+ * dα/dy at depth y: from the subsections' perimeter rates where the section reports them (exact, and one look-up),
+ * otherwise by a central difference kept inside the section (Darcy–Weisbach, whose α depends on the discharge).
+ */
+export function alphaSlopeAt(hs: HydraulicSection, y: number, discharge: number): number {
+  const exact = conveyanceWithSlopes(hs, y);
+  if (exact !== undefined) return exact.alphaSlope;
+  const h = alphaDerivativeStep * Math.max(y, hs.section.lengthScale);
+  const up = Math.min(y + h, hs.section.maxDepth);
+  const down = Math.max(y - h, 0.5 * y);
+  return (alphaAt(hs, up, discharge) - alphaAt(hs, down, discharge)) / (up - down);
 }
 
 /** The state at depth y (0 < y ≤ maxDepth; the caller keeps y inside the section). */

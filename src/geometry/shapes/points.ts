@@ -359,8 +359,12 @@ export function points(spec: PointsSpec): PointsSection {
   const maxDepth = Math.min(first[1], last[1]) - invert;
   const zoneValues = zones.map((zone) => zone.value);
 
+  /** the interval found last: the solvers evaluate runs of nearby depths, and elements and subsections at the same one */
+  let lastInterval = 0;
   /** index of the interval holding depth y (the last level ≤ y) */
   const intervalOf = (y: number): number => {
+    const k = lastInterval;
+    if (levels[k]! <= y && (k + 1 === intervals || y < levels[k + 1]!)) return k;
     let lo = 0;
     let hi = intervals - 1;
     while (lo < hi) {
@@ -368,6 +372,7 @@ export function points(spec: PointsSpec): PointsSection {
       if (levels[mid]! <= y) lo = mid;
       else hi = mid - 1;
     }
+    lastInterval = lo;
     return lo;
   };
 
@@ -421,7 +426,7 @@ export function points(spec: PointsSpec): PointsSection {
   };
 
   // the same values as `subsections`, written into a caller's buffer (no allocation; see Section.subsectionsInto)
-  const subsectionsInto = (depth: number, out: Float64Array): number => {
+  const subsectionsInto = (depth: number, out: Float64Array, rates?: Float64Array): number => {
     check(depth);
     const y = Math.min(depth, maxDepth);
     const k = intervalOf(y);
@@ -437,6 +442,7 @@ export function points(spec: PointsSpec): PointsSection {
       out[w + 1] = coef[o + P0]! + coef[o + PS]! * u;
       out[w + 2] = t + s * u;
       out[w + 3] = zoneValues[zone]!;
+      if (rates !== undefined) rates[i] = coef[o + PS]!;
     }
     return list.length;
   };
