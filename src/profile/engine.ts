@@ -15,6 +15,7 @@
 import { InputError, NumericalError, type Problem } from '../core/errors.js';
 import { accuracyFor, jumpToeSubdivisions, jumpToeTolerance, nearCriticalBand } from '../core/tolerances.js';
 import { flowState } from '../hydraulics/state.js';
+import { requireDepth } from '../hydraulics/depthSearch.js';
 import type { HydraulicSection } from '../hydraulics/hydraulicSection.js';
 import type {
   ControlRecord,
@@ -28,7 +29,7 @@ import type {
 } from '../results/types.js';
 import { classifyReach, profileStretches, type ReachClass } from './classify.js';
 import { breakStart, downstreamStart, type EndInfo, upstreamStart } from './controls.js';
-import { pointState } from './energy.js';
+import { pointState, type PointState } from './energy.js';
 import { jumpAt, locateToe } from './jump.js';
 import { integrators, referenceIntegrator } from './methods.js';
 import type { FlowRegime, ProfileIntegrator, StretchProfile, StretchSpec } from './stretch.js';
@@ -314,6 +315,8 @@ function endClass(piece: Piece, end: 'upstream' | 'downstream'): ReachClass {
 
 interface Context {
   readonly input: ProfileInput;
+  /** the states the surveyed steps balanced, per section (a sweep each way: at most a few), for the station results */
+  readonly states: Map<HydraulicSection, Array<{ readonly discharge: number; readonly state: PointState }>>;
   readonly warnings: string[];
   readonly integrate: ProfileIntegrator;
   readonly refinement: number;
@@ -379,9 +382,24 @@ function integratePiece(ctx: Context, piece: Piece, stations: number[], startDep
     () => accuracyFor(system, 0) / (refinement * refinement),
   );
   ctx.steps += result.steps;
+  for (let k = 0; k < result.states.length; k++) rememberState(ctx, piece.nodes[order[k]!]!.section, piece.discharge, result.states[k]!);
   if (result.setToCritical === undefined) return { depths: result.depths, steps: result.steps };
   const j = result.setToCritical;
   return { depths: result.depths, steps: result.steps, stop: { station: piece.stations[j]!, depth: piece.critical!(j), reason: 'critical' } };
+}
+
+function rememberState(ctx: Context, hs: HydraulicSection, discharge: number, state: PointState): void {
+  const list = ctx.states.get(hs);
+  if (list === undefined) ctx.states.set(hs, [{ discharge, state }]);
+  else list.push({ discharge, state });
+}
+
+/** A state a surveyed step balanced at exactly this depth and discharge, if any. */
+function rememberedState(ctx: Context, hs: HydraulicSection, depth: number, discharge: number): PointState | undefined {
+  const list = ctx.states.get(hs);
+  if (list === undefined) return undefined;
+  for (const kept of list) if (kept.state.depth === depth && kept.discharge === discharge) return kept.state;
+  return undefined;
 }
 
 /** A profile over one output interval as a function continuous in x (for the jump toe search). */
@@ -475,6 +493,7 @@ export function computeProfile(input: ProfileInput, options: EngineOptions = {})
     refinement: input.refinement ?? 1,
     totalLength: reaches.reduce((s, r) => s + reachLength(r), 0),
     steps: 0,
+    states: new Map(),
   };
   const notes: string[] = [];
   const controls: ControlRecord[] = [];
@@ -881,7 +900,7 @@ export function computeProfile(input: ProfileInput, options: EngineOptions = {})
       entries.push(e);
     }
   }
-  const stationsOut: StationResult[] = entries.map((e) => stationResult(pieces[e.piece]!, e, pieces[e.piece]!.discharge));
+  const stationsOut: StationResult[] = entries.map((e) => stationResult(ctx, pieces[e.piece]!, e, pieces[e.piece]!.discharge));
   const reachResults: ReachResult[] = reaches.map((reach, k) => {
     const cls = classes[k]!;
     // every piece's own entries, ends included (the break station is shared with the neighbour)
@@ -931,11 +950,11 @@ function regimeOf(depth: number, yc: number): Regime {
   return depth > yc ? 'subcritical' : 'supercritical';
 }
 
-function stationResult(piece: Piece, e: Entry, discharge: number): StationResult {
+function stationResult(ctx: Context, piece: Piece, e: Entry, discharge: number): StationResult {
   const hs = sectionAt(piece, e.station);
-  const state = flowState(hs, e.depth, discharge);
   const bed = bedAt(piece, e.station);
   if (!piece.nodes) {
+    const state = flowState(hs, e.depth, discharge);
     const yc = piece.cls.criticalDepth;
     return {
       station: e.station,
@@ -951,21 +970,25 @@ function stationResult(piece: Piece, e: Entry, discharge: number): StationResult
       normalDepth: piece.cls.normalDepth,
     };
   }
-  // a surveyed node: the regime from dE/dy where the flow is clearly away from critical; critical depth itself is
-  // worked out when it is first read (a long survey reports it at every node and flow, and few steps needed it)
+  // a surveyed node: the state its step balanced (else evaluated here, inside the section); the regime from dE/dy
+  // where the flow is clearly away from critical; critical depth itself is worked out when it is first read (a long
+  // survey reports it at every node and flow, and few steps needed it)
   const j = nearestNode(piece.nodes, e.station);
   const critical = piece.critical!;
-  const dEdy = pointState(hs, e.depth, discharge).dEdy;
+  const state = rememberedState(ctx, hs, e.depth, discharge) ?? pointState(hs, requireDepth(hs.section, e.depth, 'flow state'), discharge);
+  const g = hs.units.g;
+  const dEdy = state.dEdy;
   const regime: Regime = Math.abs(dEdy) >= nearCriticalBand ? (dEdy > 0 ? 'subcritical' : 'supercritical') : regimeOf(e.depth, critical(j));
   let reported: number | undefined;
-  return {
+  const result: StationResult = {
     station: e.station,
     bedElevation: bed,
     depth: e.depth,
     wsel: bed + e.depth,
-    energyElevation: bed + state.specificEnergy,
-    velocity: state.velocity,
-    froude: state.froude,
+    energyElevation: bed + state.energy,
+    velocity: discharge / state.area,
+    // F = √(αQ²T/(gA³)), as flowState gives it
+    froude: Math.sqrt((state.alpha * discharge * discharge * state.topWidth) / (g * state.area * state.area * state.area)),
     regime,
     reach: piece.reach.id,
     get criticalDepth(): number {
@@ -975,8 +998,9 @@ function stationResult(piece: Piece, e: Entry, discharge: number): StationResult
       reported = value;
     },
     normalDepth: null,
-    ...(piece.nodes[j]!.station === e.station && piece.nodes[j]!.interpolated ? { interpolated: true } : {}),
   };
+  if (piece.nodes[j]!.station === e.station && piece.nodes[j]!.interpolated) result.interpolated = true;
+  return result;
 }
 
 /** A stop that another profile covers, told as what happened rather than as what is missing. */

@@ -41,6 +41,8 @@ export const defaultExpansion = 0.3;
 export interface SurveyedRun {
   /** depths at the nodes in the order given, up to and including a node set to critical depth */
   readonly depths: number[];
+  /** the balanced state at each depth (the start's too), so results need not evaluate them again; none for a node set to critical depth */
+  readonly states: PointState[];
   /** the node set to critical depth because no depth on the branch balanced the step into it */
   readonly setToCritical?: number;
   readonly steps: number;
@@ -77,6 +79,7 @@ export function surveyedStretch(
   const first = order[0]!;
   let known = pointState(nodes[first]!.section, startDepth, discharge);
   const depths = [startDepth];
+  const states = [known];
   const subcritical = regime === 'subcritical';
   for (let k = 1; k < order.length; k++) {
     const a = order[k - 1]!;
@@ -112,10 +115,11 @@ export function surveyedStretch(
     if (outcome.stop?.reason === 'full') throw new SectionTopReached(nodes[b]!.station, nodes[b]!.section.section.maxDepth);
     if (!outcome.state) {
       depths.push(critical(b));
-      return { depths, setToCritical: b, steps: k };
+      return { depths, states, setToCritical: b, steps: k };
     }
     known = outcome.state;
     depths.push(known.depth);
+    states.push(known);
   }
-  return { depths, steps: order.length - 1 };
+  return { depths, states, steps: order.length - 1 };
 }
