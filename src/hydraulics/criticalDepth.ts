@@ -21,7 +21,7 @@
 import { HydraulicError, NumericalError } from '../core/errors.js';
 import { brentRoot, expandUpward } from '../core/roots.js';
 import type { Section } from '../geometry/section.js';
-import { conveyanceAndAlpha, conveyanceWithSlopes, type HydraulicSection } from './hydraulicSection.js';
+import { conveyanceAndAlpha, conveyanceSlopesInto, type HydraulicSection, SlopeSlot } from './hydraulicSection.js';
 import {
   depthTolerance,
   extendSectionError,
@@ -80,6 +80,9 @@ export function energyAt(hs: HydraulicSection, y: number, discharge: number): nu
   return y + (alpha * discharge * discharge) / (2 * hs.units.g * e.area * e.area);
 }
 
+/** scratch for conveyanceSlopesInto (energySlopeAt runs inside the extrema searches) */
+const slopeScratch = new Float64Array(6);
+
 /**
  * dE/dy = 1 − αQ²T/(gA³) + (Q²/2gA²)·dα/dy at depth y, with dα/dy from the subsections' perimeter rates; NaN where
  * that has no analytic form (the extrema search then minimises E itself).
@@ -93,9 +96,11 @@ export function energySlopeAt(hs: HydraulicSection, y: number, discharge: number
   let alphaSlope = 0;
   if (!hasSingleCriticalDepth(hs.section) && hs.alpha === undefined && hs.section.compound) {
     // one look-up: the subsections give the area and top width as well
-    const slopes = conveyanceWithSlopes(hs, y);
-    if (slopes === undefined) return NaN;
-    ({ area, topWidth, alpha, alphaSlope } = slopes);
+    if (!conveyanceSlopesInto(hs, y, slopeScratch)) return NaN;
+    area = slopeScratch[SlopeSlot.area]!;
+    topWidth = slopeScratch[SlopeSlot.topWidth]!;
+    alpha = slopeScratch[SlopeSlot.alpha]!;
+    alphaSlope = slopeScratch[SlopeSlot.alphaSlope]!;
   } else ({ area, topWidth } = hs.section.elements(y));
   const a2 = area * area;
   return 1 - (alpha * q2 * topWidth) / (g * a2 * area) + (q2 * alphaSlope) / (2 * g * a2);

@@ -2,11 +2,11 @@
  * The specific-energy curve E(y) = y + Q²·α/(2gA²) of a section sampled at the depth table's depths, in its
  * discharge-free parts, for the critical-depth and alternate-depth searches of irregular and compound sections:
  * the weight α/(2gA²) (E = y + Q²·weight), the slope weight (dE/dy = 1 + Q²·slopeWeight, with dα/dy from the
- * subsections' perimeter rates, hydraulicSection.ts conveyanceWithSlopes) and the index of the sampled curve's
+ * subsections' perimeter rates, hydraulicSection.ts conveyanceSlopesInto) and the index of the sampled curve's
  * extrema (extremaIndex.ts). Kept per section like the depth table (depthTable.ts keptTable), and lean (three
  * numbers per sample): a long survey keeps one per cross-section.
  */
-import { conveyanceAndAlpha, conveyanceWithSlopes, type HydraulicSection } from './hydraulicSection.js';
+import { conveyanceAndAlpha, conveyanceSlopesInto, type HydraulicSection, SlopeSlot } from './hydraulicSection.js';
 import { keptTable, sampleDepths } from './depthTable.js';
 import { type ExtremaIndex, extremaIndex } from './extremaIndex.js';
 
@@ -30,16 +30,19 @@ function build(hs: HydraulicSection, top: number, discharge: number | undefined)
   const slopeWeight = new Float64Array(n);
   const g = hs.units.g;
   const alphaVaries = hs.alpha === undefined && hs.section.compound;
+  const slopes = new Float64Array(6);
   for (let i = 0; i < n; i++) {
     const y = depth[i]!;
     // with α varying, one look-up gives the subsections, whose sums are the area and top width
-    const slopes = discharge === undefined && alphaVaries ? conveyanceWithSlopes(hs, y) : undefined;
     let area: number;
     let topWidth: number;
     let alpha = hs.alpha ?? 1;
     let alphaSlope = 0;
-    if (slopes !== undefined) {
-      ({ area, topWidth, alpha, alphaSlope } = slopes);
+    if (alphaVaries && discharge === undefined && conveyanceSlopesInto(hs, y, slopes)) {
+      area = slopes[SlopeSlot.area]!;
+      topWidth = slopes[SlopeSlot.topWidth]!;
+      alpha = slopes[SlopeSlot.alpha]!;
+      alphaSlope = slopes[SlopeSlot.alphaSlope]!;
     } else {
       ({ area, topWidth } = hs.section.elements(y));
       if (alphaVaries) {

@@ -92,19 +92,22 @@ const logConveyanceExponents: Partial<Record<HydraulicSection['law'], readonly [
 let rateScratch = new Float64Array(8);
 let slopeScratch = new Float64Array(4 * 8);
 
+/** Where conveyanceSlopesInto writes each value. */
+export const SlopeSlot = { conveyance: 0, alpha: 1, area: 2, topWidth: 3, conveyanceSlope: 4, alphaSlope: 5 } as const;
+
 /**
  * conveyanceAndAlpha at a depth together with dK/dy and dα/dy, worked out from the subsections' areas, top widths
  * (dA/dy) and perimeter rates (dP/dy) rather than by differencing: with Si = Ki³/Ai², S = ΣSi and α = S·A²/K³,
  *   dα/dy = α·(S′/S + 2T/A − 3K′/K),  Si′ = Si·(3Ki′/Ki − 2Ti/Ai),  Ki′ = Ki·(a·Ti/Ai − b·Pi′/Pi)
  * (the logarithmic derivative of α = Σ(Ki³/Ai²)/(K³/A²), Chow 1959 §6-4's definition). The conveyance and α are
- * the same sums in the same order as conveyanceAndAlpha's, so energies agree to the last bit. Undefined where the
- * rates cannot be formed this way: Darcy–Weisbach (K depends on the discharge), or a section that does not
- * report perimeter rates; callers then difference numerically.
+ * the same sums in the same order as conveyanceAndAlpha's, so energies agree to the last bit. Written into `out` at
+ * the SlopeSlot places (no allocation: the tables call it at every sample); false where the rates cannot be formed
+ * this way: Darcy–Weisbach (K depends on the discharge), or a section that does not report perimeter rates.
  */
-export function conveyanceWithSlopes(hs: HydraulicSection, depth: number): ConveyanceSlopes | undefined {
+export function conveyanceSlopesInto(hs: HydraulicSection, depth: number, result: Float64Array): boolean {
   const section = hs.section;
   const exponents = logConveyanceExponents[hs.law];
-  if (exponents === undefined || section.subsectionsInto === undefined || section.subsectionLimit === undefined) return undefined;
+  if (exponents === undefined || section.subsectionsInto === undefined || section.subsectionLimit === undefined) return false;
   const limit = section.subsectionLimit;
   if (slopeScratch.length < 4 * limit) slopeScratch = new Float64Array(4 * limit);
   if (rateScratch.length < limit) rateScratch = new Float64Array(limit);
@@ -145,8 +148,30 @@ export function conveyanceWithSlopes(hs: HydraulicSection, depth: number): Conve
     alphaSlope = alpha * (sumSlope / sum + (2 * totalWidth) / totalArea - (3 * kSlope) / k);
   }
   // a section that left a rate unwritten, or a subsection too thin for the ratios: no analytic rates here
-  if (!Number.isFinite(kSlope) || !Number.isFinite(alphaSlope)) return undefined;
-  return { conveyance: k, alpha, area: totalArea, topWidth: totalWidth, conveyanceSlope: kSlope, alphaSlope };
+  if (!Number.isFinite(kSlope) || !Number.isFinite(alphaSlope)) return false;
+  result[SlopeSlot.conveyance] = k;
+  result[SlopeSlot.alpha] = alpha;
+  result[SlopeSlot.area] = totalArea;
+  result[SlopeSlot.topWidth] = totalWidth;
+  result[SlopeSlot.conveyanceSlope] = kSlope;
+  result[SlopeSlot.alphaSlope] = alphaSlope;
+  return true;
+}
+
+const slopeResult = new Float64Array(6);
+
+/** conveyanceSlopesInto as an object; undefined where the rates cannot be formed analytically. */
+export function conveyanceWithSlopes(hs: HydraulicSection, depth: number): ConveyanceSlopes | undefined {
+  if (!conveyanceSlopesInto(hs, depth, slopeResult)) return undefined;
+  const r = slopeResult;
+  return {
+    conveyance: r[SlopeSlot.conveyance]!,
+    alpha: r[SlopeSlot.alpha]!,
+    area: r[SlopeSlot.area]!,
+    topWidth: r[SlopeSlot.topWidth]!,
+    conveyanceSlope: r[SlopeSlot.conveyanceSlope]!,
+    alphaSlope: r[SlopeSlot.alphaSlope]!,
+  };
 }
 
 export function conveyance(hs: HydraulicSection, depth: number, discharge?: number): number {

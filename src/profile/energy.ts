@@ -10,7 +10,9 @@
  * and direct steps balance E including α(y), so the ODE must use the same E.
  */
 import { alphaDerivativeStep } from '../core/tolerances.js';
-import { conveyanceAndAlpha, conveyanceWithSlopes, type HydraulicSection } from '../hydraulics/hydraulicSection.js';
+import { conveyanceAndAlpha, conveyanceSlopesInto, type HydraulicSection, SlopeSlot } from '../hydraulics/hydraulicSection.js';
+
+const slopeScratch = new Float64Array(6);
 
 export interface PointState {
   readonly depth: number;
@@ -79,8 +81,7 @@ function energySlope(hs: HydraulicSection, y: number, discharge: number, a: numb
  * otherwise by a central difference kept inside the section (Darcy–Weisbach, whose α depends on the discharge).
  */
 export function alphaSlopeAt(hs: HydraulicSection, y: number, discharge: number): number {
-  const exact = conveyanceWithSlopes(hs, y);
-  if (exact !== undefined) return exact.alphaSlope;
+  if (conveyanceSlopesInto(hs, y, slopeScratch)) return slopeScratch[SlopeSlot.alphaSlope]!;
   const h = alphaDerivativeStep * Math.max(y, hs.section.lengthScale);
   const up = Math.min(y + h, hs.section.maxDepth);
   const down = Math.max(y - h, 0.5 * y);

@@ -971,15 +971,15 @@ function stationResult(ctx: Context, piece: Piece, e: Entry, discharge: number):
     };
   }
   // a surveyed node: the state its step balanced (else evaluated here, inside the section); the regime from dE/dy
-  // where the flow is clearly away from critical; critical depth itself is worked out when it is first read (a long
-  // survey reports it at every node and flow, and few steps needed it)
+  // where the flow is clearly away from critical. Critical depth is reported at every node: it is worked out here
+  // (once per node and discharge, kept by piece.critical), as a plain value: results are copied and serialised,
+  // which would read any deferred value anyway, and an object with accessors costs far more to make than a plain one
   const j = nearestNode(piece.nodes, e.station);
-  const critical = piece.critical!;
+  const yc = piece.critical!(j);
   const state = rememberedState(ctx, hs, e.depth, discharge) ?? pointState(hs, requireDepth(hs.section, e.depth, 'flow state'), discharge);
   const g = hs.units.g;
   const dEdy = state.dEdy;
-  const regime: Regime = Math.abs(dEdy) >= nearCriticalBand ? (dEdy > 0 ? 'subcritical' : 'supercritical') : regimeOf(e.depth, critical(j));
-  let reported: number | undefined;
+  const regime: Regime = Math.abs(dEdy) >= nearCriticalBand ? (dEdy > 0 ? 'subcritical' : 'supercritical') : regimeOf(e.depth, yc);
   const result: StationResult = {
     station: e.station,
     bedElevation: bed,
@@ -991,12 +991,7 @@ function stationResult(ctx: Context, piece: Piece, e: Entry, discharge: number):
     froude: Math.sqrt((state.alpha * discharge * discharge * state.topWidth) / (g * state.area * state.area * state.area)),
     regime,
     reach: piece.reach.id,
-    get criticalDepth(): number {
-      return (reported ??= critical(j));
-    },
-    set criticalDepth(value: number) {
-      reported = value;
-    },
+    criticalDepth: yc,
     normalDepth: null,
   };
   if (piece.nodes[j]!.station === e.station && piece.nodes[j]!.interpolated) result.interpolated = true;

@@ -60,6 +60,40 @@ export function eddyLoss(node: SurveyNode, upstream: PointState, downstream: Poi
   return dh > 0 ? (node.contraction ?? defaultContraction) * dh : (node.expansion ?? defaultExpansion) * -dh;
 }
 
+/** The energy balance into node `node` from its neighbour, as a StretchSpec of two stations 0 and `delta`. */
+class NodeStep implements StretchSpec {
+  hs: StretchSpec['hs'];
+  slope = 0;
+  readonly stations: [number, number] = [0, 0];
+  startDepth = 0;
+  tolerance = 0;
+  readonly normalDepth = null;
+  readonly lazyCritical: boolean;
+  private node = 0;
+  constructor(
+    private readonly nodes: readonly SurveyNode[],
+    private readonly critical: (node: number) => number,
+    readonly regime: FlowRegime,
+    readonly discharge: number,
+    readonly averaging: FrictionAveraging,
+  ) {
+    this.hs = nodes[0]!.section;
+    this.lazyCritical = regime === 'subcritical';
+  }
+  moveTo(node: number, slope: number, delta: number, startDepth: number, tolerance: number): void {
+    this.node = node;
+    this.hs = this.nodes[node]!.section;
+    this.slope = slope;
+    this.stations[1] = delta;
+    this.startDepth = startDepth;
+    this.tolerance = tolerance;
+  }
+  /** worked out on first read (see energyStep), kept by the caller's critical(node) */
+  get criticalDepth(): number {
+    return this.critical(this.node);
+  }
+}
+
 /**
  * Run through the nodes `order` (indices, each next to the previous one), from `startDepth` at the first.
  * Subcritical runs go upstream (decreasing index), supercritical downstream. `critical(j)` gives node j's critical
@@ -81,29 +115,17 @@ export function surveyedStretch(
   const depths = [startDepth];
   const states = [known];
   const subcritical = regime === 'subcritical';
+  // one spec for the whole run, moved from step to step (a new object per step, with critical depth read through
+  // an accessor, cost more than the step's own arithmetic on a long survey)
+  const spec = new NodeStep(nodes, critical, regime, discharge, averaging);
   for (let k = 1; k < order.length; k++) {
     const a = order[k - 1]!;
     const b = order[k]!;
     const u = Math.min(a, b);
     const d = Math.max(a, b);
     const length = flowLength(nodes, u);
-    const slope = (nodes[u]!.bedElevation - nodes[d]!.bedElevation) / length;
     const delta = b > a ? length : -length;
-    const spec: StretchSpec = {
-      hs: nodes[b]!.section,
-      slope,
-      discharge,
-      stations: [0, delta],
-      startDepth: known.depth,
-      regime,
-      get criticalDepth() {
-        return critical(b);
-      },
-      lazyCritical: subcritical,
-      normalDepth: null,
-      averaging,
-      tolerance: tolerance(b),
-    };
+    spec.moveTo(b, (nodes[u]!.bedElevation - nodes[d]!.bedElevation) / length, delta, known.depth, tolerance(b));
     const upstreamNode = nodes[u]!;
     const loss = (s1: PointState, s2: PointState) => (b > a ? eddyLoss(upstreamNode, s1, s2) : eddyLoss(upstreamNode, s2, s1));
     // the next depth guessed by carrying on the last change (a survey's nodes are close: the change is smooth). Only
