@@ -160,12 +160,14 @@ export function criticalDepth(hs: HydraulicSection, discharge: number): number {
   const extrema = specificEnergyExtrema(hs, discharge);
   const depths = extrema.minima;
   let best = depths[0]!;
+  // one minimum with the curve rising at the top (the usual case): no energies to compare
+  if (depths.length === 1 && !extrema.fallingAtTop) return best;
   let least = energyAt(hs, best, discharge);
-  for (const y of depths.slice(1)) {
-    const e = energyAt(hs, y, discharge);
+  for (let k = 1; k < depths.length; k++) {
+    const e = energyAt(hs, depths[k]!, discharge);
     if (e < least) {
       least = e;
-      best = y;
+      best = depths[k]!;
     }
   }
   if (extrema.fallingAtTop && energyAt(hs, extrema.top, discharge) < least) {

@@ -115,7 +115,10 @@ export function conveyanceSlopesInto(hs: HydraulicSection, depth: number, result
   const rates = rateScratch;
   rates.fill(NaN, 0, limit);
   const count = section.subsectionsInto(depth, out, rates);
-  const [a, b] = exponents;
+  const a = exponents[0];
+  const b = exponents[1];
+  const manning = hs.law === 'manning';
+  const factor = hs.units.manningFactor;
   let totalArea = 0;
   let totalWidth = 0;
   for (let i = 0; i < count; i++) {
@@ -129,7 +132,9 @@ export function conveyanceSlopesInto(hs: HydraulicSection, depth: number, result
   for (let i = 0; i < count; i++) {
     const area = out[4 * i]!;
     const perimeter = out[4 * i + 1]!;
-    const ki = conveyanceOf(area, perimeter, out[4 * i + 3]!, hs.law, hs.units);
+    // conveyanceOf's Manning and Chézy forms, written out (this runs at every sample of every table)
+    const r = area > 0 && perimeter > 0 ? area / perimeter : 0;
+    const ki = r === 0 ? 0 : manning ? (factor / out[4 * i + 3]!) * area * Math.cbrt(r * r) : out[4 * i + 3]! * area * Math.sqrt(r);
     k += ki;
     if (ki > 0) {
       const width = out[4 * i + 2]!;

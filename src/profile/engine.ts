@@ -315,8 +315,8 @@ function endClass(piece: Piece, end: 'upstream' | 'downstream'): ReachClass {
 
 interface Context {
   readonly input: ProfileInput;
-  /** the states the surveyed steps balanced, per section (a sweep each way: at most a few), for the station results */
-  readonly states: Map<HydraulicSection, Array<{ readonly discharge: number; readonly state: PointState }>>;
+  /** per piece and node, the states the surveyed steps balanced there (a sweep each way: at most a few), for the station results */
+  readonly states: Array<Array<PointState[] | undefined> | undefined>;
   readonly warnings: string[];
   readonly integrate: ProfileIntegrator;
   readonly refinement: number;
@@ -382,23 +382,24 @@ function integratePiece(ctx: Context, piece: Piece, stations: number[], startDep
     () => accuracyFor(system, 0) / (refinement * refinement),
   );
   ctx.steps += result.steps;
-  for (let k = 0; k < result.states.length; k++) rememberState(ctx, piece.nodes[order[k]!]!.section, piece.discharge, result.states[k]!);
+  for (let k = 0; k < result.states.length; k++) rememberState(ctx, piece, order[k]!, result.states[k]!);
   if (result.setToCritical === undefined) return { depths: result.depths, steps: result.steps };
   const j = result.setToCritical;
   return { depths: result.depths, steps: result.steps, stop: { station: piece.stations[j]!, depth: piece.critical!(j), reason: 'critical' } };
 }
 
-function rememberState(ctx: Context, hs: HydraulicSection, discharge: number, state: PointState): void {
-  const list = ctx.states.get(hs);
-  if (list === undefined) ctx.states.set(hs, [{ discharge, state }]);
-  else list.push({ discharge, state });
+function rememberState(ctx: Context, piece: Piece, node: number, state: PointState): void {
+  const byNode = (ctx.states[piece.index] ??= new Array<PointState[] | undefined>(piece.nodes!.length));
+  const list = byNode[node];
+  if (list === undefined) byNode[node] = [state];
+  else list.push(state);
 }
 
-/** A state a surveyed step balanced at exactly this depth and discharge, if any. */
-function rememberedState(ctx: Context, hs: HydraulicSection, depth: number, discharge: number): PointState | undefined {
-  const list = ctx.states.get(hs);
+/** A state a surveyed step of this piece balanced at node `node` at exactly this depth, if any. */
+function rememberedState(ctx: Context, piece: Piece, node: number, depth: number): PointState | undefined {
+  const list = ctx.states[piece.index]?.[node];
   if (list === undefined) return undefined;
-  for (const kept of list) if (kept.state.depth === depth && kept.discharge === discharge) return kept.state;
+  for (const state of list) if (state.depth === depth) return state;
   return undefined;
 }
 
@@ -493,7 +494,7 @@ export function computeProfile(input: ProfileInput, options: EngineOptions = {})
     refinement: input.refinement ?? 1,
     totalLength: reaches.reduce((s, r) => s + reachLength(r), 0),
     steps: 0,
-    states: new Map(),
+    states: [],
   };
   const notes: string[] = [];
   const controls: ControlRecord[] = [];
@@ -976,7 +977,7 @@ function stationResult(ctx: Context, piece: Piece, e: Entry, discharge: number):
   // which would read any deferred value anyway, and an object with accessors costs far more to make than a plain one
   const j = nearestNode(piece.nodes, e.station);
   const yc = piece.critical!(j);
-  const state = rememberedState(ctx, hs, e.depth, discharge) ?? pointState(hs, requireDepth(hs.section, e.depth, 'flow state'), discharge);
+  const state = rememberedState(ctx, piece, j, e.depth) ?? pointState(hs, requireDepth(hs.section, e.depth, 'flow state'), discharge);
   const g = hs.units.g;
   const dEdy = state.dEdy;
   const regime: Regime = Math.abs(dEdy) >= nearCriticalBand ? (dEdy > 0 ? 'subcritical' : 'supercritical') : regimeOf(e.depth, yc);
