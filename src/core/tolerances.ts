@@ -101,6 +101,8 @@ export const guessExpansions = 4;
 /** Profile: where critical depth is not yet known (a surveyed section), the bracket around a guessed depth reaches down
  *  to at most this fraction of the guess (it must stay inside the section, above a zero depth). */
 export const lazyBracketFloor = 1 / 16;
+/** Profile: the standard step's bracket from its guess reaches this many times as far as a Newton step would (the slope is an estimate). */
+export const newtonBracketMargin = 3;
 /** Profile: the standard step closes in on a critical stop until it lies within this fraction of the stretch length. */
 export const stopApproachFraction = 1e-9;
 /** Profile: at most this many closing-in steps towards a critical stop. */

@@ -27,6 +27,7 @@ import {
   firstStepFraction,
   guessExpansions,
   lazyBracketFloor,
+  newtonBracketMargin,
   nearCriticalBand,
   nearCriticalFloor,
   profileAccuracySafety,
@@ -93,6 +94,58 @@ function bracketNear(f: (y: number) => number, guess: number, width: number, lo:
   }
 }
 
+/**
+ * A bracket of a root of f starting at `guess` itself: f there tells the side the root lies on (f rising with depth
+ * when `rising` is +1), and the other end is put a little beyond where a Newton step with `slope` (an estimate of
+ * |df/dy|, ≤ 0 or not finite when unknown) would land, or `width` away without one; widened towards the root as
+ * bracketNear does. A good guess and slope give a bracket only a few times wider than the guess's error, which
+ * Brent's method closes in one or two evaluations.
+ */
+function bracketFrom(
+  f: (y: number) => number,
+  guess: number,
+  width: number,
+  lo: number,
+  hi: number,
+  rising: number,
+  slope: number,
+): Bracket | undefined {
+  let x = guess;
+  let fx = f(x);
+  if (fx === 0) return { a: x, b: x, fa: 0, fb: 0 };
+  const down = rising * fx > 0;
+  let w = slope > 0 && Number.isFinite(slope) ? Math.min(width, Math.abs(fx / slope) * newtonBracketMargin) : width;
+  for (let k = 0; ; k++) {
+    const y = down ? Math.max(lo, x - w) : Math.min(hi, x + w);
+    if (y === x) return undefined;
+    const fy = f(y);
+    if (fx * fy <= 0) return down ? { a: y, b: x, fa: fy, fb: fx } : { a: x, b: y, fa: fx, fb: fy };
+    if (k >= guessExpansions) return undefined;
+    x = y;
+    fx = fy;
+    w *= 4;
+  }
+}
+
+/**
+ * The root in a bracket with known end values: first one secant step, accepted where the residual left there,
+ * divided by the bracket's own slope (fb − fa)/(b − a), puts the root within xTolerance of it (the Newton error
+ * estimate; on the smooth, monotone residual of a step the bracket's chord slope is within a small factor of the
+ * local one, and xTolerance is 1e-5 of the accuracy goal); otherwise Brent's method on the part of the bracket that
+ * holds the root.
+ */
+function closeBracket(f: (y: number) => number, bracket: Bracket, xTolerance: number, what: string): number {
+  const { a, b, fa, fb } = bracket;
+  if (fa === 0) return a;
+  if (fb === 0 || a === b) return b;
+  const chord = (fb - fa) / (b - a);
+  const y = a - fa / chord;
+  if (!(y > a && y < b)) return rootIn(f, bracket, xTolerance, what);
+  const fy = f(y);
+  if (Math.abs(fy / chord) <= xTolerance) return y;
+  return rootIn(f, fy * fa < 0 ? { a, b: y, fa, fb: fy } : { a: y, b, fa: fy, fb }, xTolerance, what);
+}
+
 /** Brent's method on a bracket whose end values are known (they are not evaluated again). */
 function rootIn(f: (y: number) => number, bracket: Bracket, xTolerance: number, what: string): number {
   const { a, b, fa, fb } = bracket;
@@ -146,9 +199,10 @@ export function energyStep(
       last = pointState(spec.hs, y > top ? top : y, q);
       return residualOf(last);
     };
-    const bracket = bracketNear(inside, guess, width, guess * lazyBracketFloor, top, rising);
+    // the residual's slope is about dE/dy of the known state (friction adds a little): a Newton-sized bracket
+    const bracket = bracketFrom(inside, guess, width, guess * lazyBracketFloor, top, rising, Math.abs(s1.dEdy));
     if (bracket) {
-      const y = rootIn(inside, bracket, xTolerance, what);
+      const y = closeBracket(inside, bracket, xTolerance, what);
       const state = last !== undefined && last.depth === y ? last : pointState(spec.hs, y, q);
       if (rising * state.dEdy >= nearCriticalBand) return { state };
     }
