@@ -4,7 +4,8 @@
  */
 import { describe, expect, it } from 'vitest';
 import { sensitivityAnalysis } from '../../src/analysis/sensitivity.js';
-import { calibrationChart, ratingTableChart, sensitivityChart } from '../../src/cli/commands/analysisReport.js';
+import { calibrationChart, ratingTableChart } from '../../src/cli/commands/analysisReport.js';
+import { sensitivityChart } from '../../src/output/sensitivityFiles.js';
 import { calibrateRoughness } from '../../src/analysis/calibrate.js';
 import { ratingTable } from '../../src/analysis/rating.js';
 import { profileChart } from '../../src/output/charts/profileChart.js';
@@ -23,7 +24,7 @@ describe('profileChart(bands, observations)', () => {
 
   it('sensitivityChart draws each flow\'s envelope as a band under the lines, one row per base station', async () => {
     const { sensitivity, base } = sensitivityAnalysis(twoReachModel(), [{ parameter: 'n', percent: 20 }]);
-    const spec = (await sensitivityChart(sensitivity, base.result)) as unknown as Spec;
+    const spec = sensitivityChart(sensitivity, base.result) as unknown as Spec;
     const names = spec.layer.map((l) => l.name);
     expect(names.indexOf('bands')).toBeGreaterThan(names.indexOf('water'));
     expect(names.indexOf('bands')).toBeLessThan(names.indexOf('lines'));

@@ -2,11 +2,13 @@
  * `gvf run MODEL --out DIR`, run as a user runs it (the built CLI in a child process, stderr a pipe):
  * every file written and non-empty, PNGs of the stated size, the same bytes on a second run, result.json the
  * `--json` structure, user text escaped in the report, no progress bar when stderr is not a terminal (and one
- * when it is), and bad input refused with exit code 2 leaving the output folder as it was.
+ * when it is), bad input refused with exit code 2 leaving the output folder as it was, and a later run into the
+ * same folder removing what an earlier one wrote and it does not (the sensitivity files) but nothing else, even when
+ * the earlier or the later run is killed part-way (./fixtures/killAt.mjs).
  * The models are invented scenarios (tests/output/runFixtures.ts).
  */
 import { spawnSync } from 'node:child_process';
-import { existsSync, mkdirSync, readFileSync, writeFileSync } from 'node:fs';
+import { existsSync, mkdirSync, readFileSync, readdirSync, writeFileSync } from 'node:fs';
 import { join } from 'node:path';
 import { beforeAll, describe, expect, it } from 'vitest';
 import { filesIn, pngSize, scratchFolder } from '../helpers/outputFolder.js';
@@ -122,5 +124,66 @@ describe('gvf run MODEL --out DIR', () => {
     expect(r.status).toBe(0);
     expect(r.stdout).toMatch(/\rgvf [█░]+ \d+\/\d+ /);
     expect(r.stdout).toMatch(/\r +\r/);
+  });
+
+  const sensitivityFiles = ['sensitivity.csv', 'charts/sensitivity-profile.vl.json', 'charts/sensitivity-profile.svg', 'charts/sensitivity-profile.png'];
+  const record = (dir: string) => readFileSync(join(dir, '.gvf-outputs'), 'utf8').split('\n').filter((l) => l !== '');
+  const outputs = (dir: string) => new Map([...filesIn(dir)].filter(([name]) => !/(^|\/)\.gvf-tmp-/.test(name)));
+  const killAt = (at: string) => ({ NODE_OPTIONS: `--import=${join(root, 'tests', 'cli', 'fixtures', 'killAt.mjs')}`, GVF_KILL_AT: at });
+
+  it('gvf run --out after a run with --sensitivity removes sensitivity.csv and charts/sensitivity-profile.*, and keeps a user\'s own files', () => {
+    const work = scratch();
+    const out = join(work, 'out');
+    const first = gvf(['run', model(work), '--out', out, '--sensitivity', 'n=±20%']);
+    expect(first.code, first.stderr).toBe(0);
+    expect(first.stdout).toContain(`sensitivity.csv and charts/sensitivity-profile (.vl.json, .svg, .png) written to ${out}`);
+    for (const name of sensitivityFiles) expect(record(out), name).toContain(name);
+    writeFileSync(join(out, 'my-notes.txt'), 'mine');
+    writeFileSync(join(out, 'charts', 'my-sketch.svg'), '<svg/>');
+    const second = gvf(['run', model(work), '--out', out]);
+    expect(second.code, second.stderr).toBe(0);
+    for (const name of sensitivityFiles) expect(existsSync(join(out, name)), name).toBe(false);
+    expect(readFileSync(join(out, 'report.html'), 'utf8')).not.toContain('id="sensitivity"');
+    expect(readFileSync(join(out, 'my-notes.txt'), 'utf8')).toBe('mine');
+    expect(readFileSync(join(out, 'charts', 'my-sketch.svg'), 'utf8')).toBe('<svg/>');
+    // every file gvf left in the folder is recorded, and nothing else is
+    expect([...record(out)].sort()).toEqual([...filesIn(out).keys()].filter((n) => !['.gvf-outputs', 'my-notes.txt', 'charts/my-sketch.svg'].includes(n)).sort());
+  });
+
+  it('gvf run --out killed while writing its files leaves the earlier run\'s files as they were, and the next run finishes the clean-up', () => {
+    const work = scratch();
+    const out = join(work, 'out');
+    expect(gvf(['run', model(work), '--out', out, '--sensitivity', 'n=±20%']).code).toBe(0);
+    const before = filesIn(out);
+    // the third staged file: result.json and stations.csv are written under temporary names, nothing renamed yet
+    const killed = spawnSync(process.execPath, [mainJs, 'run', model(work), '--out', out], { cwd: root, encoding: 'utf8', env: { ...process.env, GVF_DEBUG: '', ...killAt('open:3') } });
+    expect(killed.signal).toBe('SIGKILL');
+    expect([...filesIn(out).keys()].some((n) => n.includes('.gvf-tmp-'))).toBe(true);
+    const after = outputs(out);
+    expect([...after.keys()].sort()).toEqual([...before.keys()].sort());
+    for (const [name, bytes] of before) expect(after.get(name)!.equals(bytes), name).toBe(true);
+    const next = gvf(['run', model(work), '--out', out]);
+    expect(next.code, next.stderr).toBe(0);
+    expect([...filesIn(out).keys()].filter((n) => n.includes('.gvf-tmp-'))).toEqual([]);
+    for (const name of sensitivityFiles) expect(existsSync(join(out, name)), name).toBe(false);
+  });
+
+  it('gvf run --out killed after renaming its files but before removing the earlier ones leaves those recorded, and the next run removes them', () => {
+    const work = scratch();
+    const out = join(work, 'out');
+    expect(gvf(['run', model(work), '--out', out, '--sensitivity', 'n=±20%']).code).toBe(0);
+    // lstat is called first when an earlier output is about to be removed
+    const killed = gvf(['run', model(work), '--out', out], killAt('lstat:1'));
+    expect(killed.code).toBe(null);
+    expect(readFileSync(join(out, 'report.html'), 'utf8')).not.toContain('id="sensitivity"');
+    for (const name of sensitivityFiles) {
+      expect(existsSync(join(out, name)), name).toBe(true);
+      expect(record(out), name).toContain(name);
+    }
+    const next = gvf(['run', model(work), '--out', out]);
+    expect(next.code, next.stderr).toBe(0);
+    for (const name of sensitivityFiles) expect(existsSync(join(out, name)), name).toBe(false);
+    expect(record(out).filter((n) => n.includes('sensitivity'))).toEqual([]);
+    expect(readdirSync(out).filter((n) => n.startsWith('.gvf-tmp-'))).toEqual([]);
   });
 });

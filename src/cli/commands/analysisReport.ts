@@ -1,6 +1,7 @@
 /**
  * Printing the analysis commands' results: readable tables, CSV (unit-labelled headers, fixed decimals) and the
- * JSON structures of `gvf calibrate`, `gvf rating` and `gvf run --sensitivity`, plus their chart specs. Chart
+ * JSON structures of `gvf calibrate` and `gvf rating`, plus their chart specs, and the envelope table
+ * `gvf run --sensitivity` prints (its files are written with the run's, src/output/sensitivityFiles.ts). Chart
  * specs only: rendering (vega, resvg) is imported by the commands when `--out` asks for files.
  */
 import type { TopLevelSpec } from 'vega-lite';
@@ -179,33 +180,6 @@ export function sensitivityText(s: Sensitivity, units: RunResult['units']): stri
   }
   if (s.warnings.length) parts.push('', 'Warnings:', ...s.warnings.map((w) => `  - ${w}`));
   return parts.join('\n');
-}
-
-export function sensitivityCsv(s: Sensitivity, units: RunResult['units']): string {
-  const u = unitsOf(units);
-  const rows = s.flows.flatMap((f) => f.stations.map((e) => ({ flow: f.id, ...e })));
-  const columns: CsvColumn<(typeof rows)[number]>[] = [
-    { name: 'flow', value: (r) => r.flow },
-    { name: 'station', unit: u.length, value: (r) => r.station, decimals: 3 },
-    { name: 'bed_elevation', unit: u.length, value: (r) => r.bedElevation },
-    { name: 'base_wsel', unit: u.length, value: (r) => r.base },
-    { name: 'lowest_wsel', unit: u.length, value: (r) => r.low },
-    { name: 'highest_wsel', unit: u.length, value: (r) => r.high },
-    { name: 'range', unit: u.length, value: (r) => r.range },
-    { name: 'lowest_case', value: (r) => r.lowCase },
-    { name: 'highest_case', value: (r) => r.highCase },
-  ];
-  return toCsv(columns, rows);
-}
-
-/** The base profile with each flow's envelope drawn as a band. */
-export async function sensitivityChart(s: Sensitivity, result: RunResult): Promise<TopLevelSpec> {
-  const { profileChart } = await import('../../output/charts/profileChart.js');
-  const variations = s.variations.map((v) => `${v.parameter} ±${v.percent} %`).join(', ');
-  return profileChart(result, {
-    title: `${result.title ? `${result.title}: ` : ''}profile with the range for ${variations}`,
-    bands: s.flows.map((f) => ({ flow: f.id, label: `Range of water surface, ${f.id}`, rows: f.stations.map((e) => ({ station: e.station, low: e.low, high: e.high })) })),
-  });
 }
 
 /* ---- files ---- */

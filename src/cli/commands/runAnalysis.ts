@@ -2,9 +2,10 @@
  * What `gvf run` adds from the analysis layer:
  * - `--flows flows.csv` (id, discharge[, downstream stage]) replaces the model's flows (analysis/batch.ts);
  * - `--sensitivity n=±20%,Q=±10%` runs the varied cases after the base run (analysis/sensitivity.ts), adds
- *   `sensitivity` to the result (so `--json` and result.json carry it), prints the envelope table and, with
- *   `--out DIR`, writes sensitivity.csv and the profile chart with the range drawn as a band (report.html, written
- *   by the run command, shows the band on its own profile and tables the widest range of each reach).
+ *   `sensitivity` to the result (so `--json` and result.json carry it) and prints the envelope table; with
+ *   `--out DIR` the run command writes sensitivity.csv and the profile chart with the range drawn as a band
+ *   together with the report (src/output/runFiles.ts: one staged step, every file recorded in DIR/.gvf-outputs),
+ *   and report.html shows the band on its own profile and tables the widest range of each reach.
  * A progress bar for the cases shows on stderr when it is a terminal.
  */
 import { flowBatch } from '../../analysis/batch.js';
@@ -14,14 +15,15 @@ import type { Variation } from '../../analysis/variation.js';
 import { InputError, type Problem } from '../../core/errors.js';
 import { unitsOf } from '../../core/units.js';
 import { readFlowTable } from '../../input/csv/flows.js';
+import * as msg from '../../input/model/messages.js';
 import type { Model } from '../../input/model/types.js';
 import type { ProfileInput } from '../../profile/types.js';
 import type { RunResult } from '../../results/types.js';
 import type { ModelRun, RunOptions } from '../../run.js';
 import type { Streams } from '../print.js';
 import { type ProgressStream, createProgress } from '../progress.js';
-import { chartFiles, sensitivityChart, sensitivityCsv, sensitivityText } from './analysisReport.js';
-import { readFlagFile, writeFiles } from './analysisInput.js';
+import { sensitivityText } from './analysisReport.js';
+import { readFlagFile } from './analysisInput.js';
 
 export interface RunAnalysisFlags {
   flows?: string;
@@ -36,8 +38,8 @@ export interface RunAnalysis {
   notes: string[];
   /** after the base run: the sensitivity cases, with `sensitivity` added to the result */
   finish(run: ModelRun, options: Omit<RunOptions, 'compare' | 'adjustInput' | 'onProgress'>, progressStream: ProgressStream): ModelRun;
-  /** after the run is printed: the envelope table (text mode) and the band chart (with --out) */
-  print(run: ModelRun, flags: { json?: boolean; out?: string }, streams: Streams): Promise<void>;
+  /** after the run is printed (and its files written): the notes and the envelope table (text mode) */
+  print(run: ModelRun, flags: { json?: boolean; out?: string }, streams: Streams): void;
 }
 
 /** The sensitivity list, read early so a bad value is reported with the other flags. */
@@ -62,7 +64,7 @@ export function prepareRunAnalysis(model: Model, flags: RunAnalysisFlags, variat
     const batch = flowBatch(model, rows);
     runModelOf = batch.model;
     if (rows.some((r) => r.downstreamStage !== undefined)) adjustInput = batch.adjustInput;
-    notes.push(`${rows.length} flow${rows.length === 1 ? '' : 's'} from ${flags.flows} replace the model's flows`, ...batch.notes);
+    notes.push(msg.flowsReplaced(rows.length, flags.flows), ...batch.notes);
   }
   return {
     model: runModelOf,
@@ -75,7 +77,7 @@ export function prepareRunAnalysis(model: Model, flags: RunAnalysisFlags, variat
         const { sensitivity } = sensitivityAnalysis(runModelOf, variations, {
           base: run,
           run: { ...options, ...(adjustInput === undefined ? {} : { adjustInput }) },
-          onCase: (done, total, label) => progress.update(done, total, `case ${label}`),
+          onCase: (done, total, label) => progress.update(done, total, msg.progressCase(label)),
         });
         const result: WithSensitivity = { ...run.result, sensitivity };
         return { ...run, result };
@@ -83,19 +85,12 @@ export function prepareRunAnalysis(model: Model, flags: RunAnalysisFlags, variat
         progress.finish();
       }
     },
-    async print(run, printFlags, streams) {
+    print(run, printFlags, streams) {
       const sensitivity = (run.result as WithSensitivity).sensitivity;
-      if (!printFlags.json) for (const note of notes) streams.out(`note: ${note}`);
-      if (sensitivity === undefined) return;
-      if (printFlags.out !== undefined) {
-        await writeFiles(printFlags.out, [
-          { name: 'sensitivity.csv', content: sensitivityCsv(sensitivity, run.result.units) },
-          ...(await chartFiles('sensitivity-profile', await sensitivityChart(sensitivity, run.result))),
-        ]);
-      }
-      if (printFlags.json) return;
+      if (!printFlags.json) for (const note of notes) streams.out(msg.note(note));
+      if (sensitivity === undefined || printFlags.json) return;
       streams.out(`\n${sensitivityText(sensitivity, run.result.units)}`);
-      if (printFlags.out !== undefined) streams.out(`sensitivity.csv and charts/sensitivity-profile (.vl.json, .svg, .png) written to ${printFlags.out}`);
+      if (printFlags.out !== undefined) streams.out(msg.sensitivityWritten(printFlags.out));
     },
   };
 }
