@@ -8,6 +8,7 @@ import { realpathSync } from 'node:fs';
 import { fileURLToPath } from 'node:url';
 import { Command, CommanderError, Option } from 'commander';
 import { programVersion as version } from '../core/version.js';
+import { helpAfterError } from '../input/model/messages.js';
 import { type Streams, exitCode, processStreams, reportError } from './print.js';
 
 function sectionOptions(command: Command): Command {
@@ -35,7 +36,7 @@ export function buildProgram(streams: Streams, setCode: (code: number) => void):
     .version(version, '-v, --version')
     .exitOverride()
     .configureOutput({ writeOut: (s) => streams.out(s), writeErr: (s) => streams.err(s.trimEnd()) })
-    .showHelpAfterError('(run gvf --help, or gvf <command> --help, for the options)');
+    .showHelpAfterError(helpAfterError);
 
   sectionOptions(program.command('section'))
     .description('normal and critical depth, slope class and flow elements of one cross-section')

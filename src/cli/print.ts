@@ -6,6 +6,7 @@
  * with one line, and the stack only when GVF_DEBUG=1.
  */
 import { GvfError, HydraulicError, InputError, NumericalError, formatProblem } from '../core/errors.js';
+import * as msg from '../input/model/messages.js';
 
 export const exitCode = { ok: 0, failure: 1, badInput: 2 } as const;
 
@@ -31,26 +32,23 @@ export function reportError(error: unknown, streams: Streams, context?: { file?:
     const file = (error as { file?: string }).file ?? context?.file;
     const lines = error.problems.map((p) => `  ${formatProblem(p)}`);
     const count = error.problems.length;
-    const head =
-      file !== undefined && error.problems.some((p) => !p.where.startsWith(file))
-        ? `gvf: ${file} is not a valid model (${count} problem${count === 1 ? '' : 's'}):`
-        : `gvf: bad input (${count} problem${count === 1 ? '' : 's'}):`;
+    const head = file !== undefined && error.problems.some((p) => !p.where.startsWith(file)) ? msg.invalidModelHeading(file, count) : msg.badInputHeading(count);
     streams.err([head, ...lines].join('\n'));
     if (debug) streams.err(error.stack ?? '');
     return exitCode.badInput;
   }
   if (error instanceof HydraulicError) {
-    streams.err(`gvf: cannot be computed: ${oneLine(error.message)}`);
+    streams.err(msg.cannotBeComputed(oneLine(error.message)));
     if (debug) streams.err(error.stack ?? '');
     return exitCode.badInput;
   }
   if (error instanceof NumericalError || error instanceof GvfError) {
-    streams.err(`gvf: the computation failed: ${oneLine(error.message)}`);
+    streams.err(msg.computationFailed(oneLine(error.message)));
     if (debug) streams.err(error.stack ?? '');
     return exitCode.failure;
   }
   const message = error instanceof Error ? error.message : String(error);
-  streams.err(`gvf: unexpected error: ${oneLine(message)} (set GVF_DEBUG=1 for details)`);
+  streams.err(msg.unexpectedError(oneLine(message)));
   if (debug && error instanceof Error) streams.err(error.stack ?? '');
   return exitCode.failure;
 }

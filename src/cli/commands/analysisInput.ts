@@ -6,19 +6,21 @@
 import { readFileSync, renameSync, writeFileSync } from 'node:fs';
 import { InputError } from '../../core/errors.js';
 import { FlagReader } from '../../input/model/flags.js';
+import * as msg from '../../input/model/messages.js';
 import { MethodName } from '../../input/model/types.js';
 import { ModelFileError } from '../../input/model/validate.js';
 import type { OutputFile } from '../../output/files.js';
 
 /** The text of a file named by `flag`; a missing or unreadable file is bad input naming the flag. */
 export function readFlagFile(flag: string, path: string): string {
-  if (path.trim() === '') throw new InputError({ where: flag, message: 'needs a file name', value: path });
+  if (path.trim() === '') throw new InputError({ where: flag, message: msg.fileNameNeeded(), value: path });
   try {
     return readFileSync(path, 'utf8');
   } catch (error) {
     const code = (error as NodeJS.ErrnoException).code;
-    const why = code === 'ENOENT' ? 'no such file' : code === 'EISDIR' ? 'a folder, not a file' : `cannot be read (${code ?? String(error)})`;
-    throw new InputError({ where: flag, message: `${path}: ${why}`, value: path });
+    const message =
+      code === 'ENOENT' ? msg.flagFileMissing(path) : code === 'EISDIR' ? msg.flagFileIsFolder(path) : msg.flagFileUnreadable(path, code ?? String(error));
+    throw new InputError({ where: flag, message, value: path });
   }
 }
 

@@ -10,6 +10,7 @@ import { InputError } from '../../core/errors.js';
 import { unitsOf } from '../../core/units.js';
 import { readHighWaterMarks } from '../../input/csv/marks.js';
 import { FlagReader } from '../../input/model/flags.js';
+import * as msg from '../../input/model/messages.js';
 import { readModelFile } from '../../input/model/parse.js';
 import { type Streams, exitCode, toJson } from '../print.js';
 import { type ProgressStream, createProgress } from '../progress.js';
@@ -27,7 +28,7 @@ export interface CalibrateFlags extends CommonFlags {
 export async function calibrateCommand(path: string, flags: CalibrateFlags, streams: Streams, progressStream: ProgressStream = process.stderr): Promise<number> {
   const reader = new FlagReader();
   const run = runFlags(reader, flags);
-  if (flags.marks === undefined) reader.problems.push({ where: '--marks', message: 'required: a CSV file of high-water marks (station, elevation, flow[, weight])' });
+  if (flags.marks === undefined) reader.problems.push({ where: '--marks', message: msg.marksRequired() });
   let bounds: { lower: number; upper: number } | undefined;
   if (flags.bounds !== undefined) {
     try {
@@ -50,7 +51,7 @@ export async function calibrateCommand(path: string, flags: CalibrateFlags, stre
         perReach: flags.perReach === true,
         ...(bounds ?? {}),
         run: { ...run, ...fileOptions(path, flags) },
-        onIteration: (i, cost) => progress.update(Math.min(i, lmMaxIterations), lmMaxIterations, `fit step ${i}, Σw·r²/2 = ${cost.toExponential(2)}`),
+        onIteration: (i, cost) => progress.update(Math.min(i, lmMaxIterations), lmMaxIterations, msg.progressFitStep(i, cost)),
       },
     );
   } catch (error) {
@@ -71,8 +72,8 @@ export async function calibrateCommand(path: string, flags: CalibrateFlags, stre
   if (flags.json) streams.out(toJson(calibrationJson(calibration)));
   else {
     streams.out(calibrationText(calibration));
-    if (flags.csv !== undefined) streams.out(`mark table written to ${flags.csv}`);
-    if (flags.out !== undefined) streams.out(`calibration.json, marks.csv and charts/calibration-profile (.vl.json, .svg, .png) written to ${flags.out}`);
+    if (flags.csv !== undefined) streams.out(msg.markTableWritten(flags.csv));
+    if (flags.out !== undefined) streams.out(msg.calibrationWritten(flags.out));
   }
   return exitCode.ok;
 }

@@ -7,6 +7,7 @@ import { parseDischarges, parseStations } from '../../analysis/options.js';
 import { ratingTable } from '../../analysis/rating.js';
 import { InputError } from '../../core/errors.js';
 import { FlagReader } from '../../input/model/flags.js';
+import * as msg from '../../input/model/messages.js';
 import { readModelFile } from '../../input/model/parse.js';
 import { type Streams, exitCode, toJson } from '../print.js';
 import { type ProgressStream, createProgress } from '../progress.js';
@@ -33,8 +34,8 @@ function collect<T>(reader: FlagReader, read: () => T): T | undefined {
 export async function ratingCommand(path: string, flags: RatingFlags, streams: Streams, progressStream: ProgressStream = process.stderr): Promise<number> {
   const reader = new FlagReader();
   const run = runFlags(reader, flags);
-  if (flags.stations === undefined) reader.problems.push({ where: '--stations', message: 'required: a list of stations like 120,480' });
-  if (flags.discharges === undefined) reader.problems.push({ where: '--discharges', message: 'required: a list like 2,5,10 or a range from:to:step like 1:20:1' });
+  if (flags.stations === undefined) reader.problems.push({ where: '--stations', message: msg.stationsRequired() });
+  if (flags.discharges === undefined) reader.problems.push({ where: '--discharges', message: msg.dischargesRequired() });
   const stations = flags.stations === undefined ? undefined : collect(reader, () => parseStations(flags.stations!));
   const discharges = flags.discharges === undefined ? undefined : collect(reader, () => parseDischarges(flags.discharges!));
   reader.done();
@@ -59,8 +60,8 @@ export async function ratingCommand(path: string, flags: RatingFlags, streams: S
   if (flags.json) streams.out(toJson(ratingJson(table)));
   else {
     streams.out(ratingText(table));
-    if (flags.csv !== undefined) streams.out(`rating table written to ${flags.csv}`);
-    if (flags.out !== undefined) streams.out(`rating.json, rating.csv and charts/rating-curve (.vl.json, .svg, .png) written to ${flags.out}`);
+    if (flags.csv !== undefined) streams.out(msg.ratingTableWritten(flags.csv));
+    if (flags.out !== undefined) streams.out(msg.ratingWritten(flags.out));
   }
   return exitCode.ok;
 }

@@ -3,6 +3,7 @@
  * the station table to CSV on request (written to a temporary name, then renamed into place).
  */
 import { renameSync, writeFileSync } from 'node:fs';
+import { stationTableWritten } from '../../input/model/messages.js';
 import { stationsCsv } from '../../output/csv.js';
 import { runReport } from '../../output/table.js';
 import type { ModelRun } from '../../run.js';
@@ -23,6 +24,6 @@ export function printRun(run: ModelRun, options: ReportOptions, streams: Streams
     streams.out(toJson(run.comparison === undefined ? run.result : { ...run.result, comparison: run.comparison }));
   } else {
     streams.out(runReport(run.result, run.comparison));
-    if (options.csv !== undefined) streams.out(`station table written to ${options.csv}`);
+    if (options.csv !== undefined) streams.out(stationTableWritten(options.csv));
   }
 }

@@ -6,7 +6,7 @@
 import type { Sensitivity } from '../../analysis/sensitivity.js';
 import { InputError, type Problem } from '../../core/errors.js';
 import { FlagReader } from '../../input/model/flags.js';
-import { chartStationOutside } from '../../input/model/messages.js';
+import * as msg from '../../input/model/messages.js';
 import { isSurveyReach } from '../../input/model/survey.js';
 import { ModelFileError } from '../../input/model/validate.js';
 import { readModelFile } from '../../input/model/parse.js';
@@ -59,7 +59,7 @@ export async function runCommand(path: string, options: RunOptions, streams: Str
   const reportFlags = ['sections', 'energyAt', 'energyFlow'] as const;
   for (const key of reportFlags) {
     if (options[key] !== undefined && options.out === undefined) {
-      reader.problems.push({ where: `--${key.replace(/[A-Z]/g, (c) => `-${c.toLowerCase()}`)}`, message: 'draws a chart of the report: use it with --out DIR' });
+      reader.problems.push({ where: `--${key.replace(/[A-Z]/g, (c) => `-${c.toLowerCase()}`)}`, message: msg.reportFlagNeedsOut() });
     }
   }
   const analysisFlags = readRunAnalysisFlags(options);
@@ -81,7 +81,7 @@ export async function runCommand(path: string, options: RunOptions, streams: Str
       interpolate: options.interpolate !== false,
       force: options.force === true,
       ...(analysis.adjustInput === undefined ? {} : { adjustInput: analysis.adjustInput }),
-      onProgress: (done, total, flow) => progress.update(done, total, `flow ${flow}`),
+      onProgress: (done, total, flow) => progress.update(done, total, msg.progressFlow(flow)),
     });
   } catch (error) {
     progress.finish();
@@ -124,13 +124,14 @@ export async function runCommand(path: string, options: RunOptions, streams: Str
       charts.finish();
     }
     printRun(run, options, streams);
-    for (const note of written.notes) streams.out(`note: ${note}`);
-    streams.out(`report written to ${written.report} (with result.json, stations.csv and ${written.charts.length} chart${written.charts.length === 1 ? '' : 's'} in ${options.out})`);
-    await analysis.print(run, options, streams);
+    // with --json, stdout holds the JSON alone: the notes go to stderr and the files written are not listed
+    for (const note of written.notes) (options.json ? streams.err : streams.out)(msg.note(note));
+    if (!options.json) streams.out(msg.reportWritten(written.report, written.charts.length, options.out));
+    analysis.print(run, options, streams);
     return exitCode.ok;
   }
   printRun(run, options, streams);
-  await analysis.print(run, options, streams);
+  analysis.print(run, options, streams);
   return exitCode.ok;
 }
 
@@ -143,7 +144,7 @@ function checkModelChartStations(path: string, result: RunResult, stations: read
   const unit = result.units === 'US' ? 'ft' : 'm';
   const problems: Problem[] = [];
   stations.forEach((x, i) => {
-    if (x < lo || x > hi) problems.push({ where: `sectionChartsAt[${i}]`, message: chartStationOutside(x, lo, hi, unit), value: x });
+    if (x < lo || x > hi) problems.push({ where: `sectionChartsAt[${i}]`, message: msg.chartStationOutside(x, lo, hi, unit), value: x });
   });
   if (problems.length > 0) throw new ModelFileError(path, problems);
 }
@@ -161,13 +162,13 @@ function checkStations(
   const hi = Math.max(...all);
   const problems: Problem[] = [];
   for (const x of sections ?? []) {
-    if (x < lo || x > hi) problems.push({ where: '--sections', message: `station ${x} is outside the channel (stations ${lo} to ${hi})`, value: x });
+    if (x < lo || x > hi) problems.push({ where: '--sections', message: msg.flagStationOutside(x, lo, hi), value: x });
   }
   if (energyAt !== undefined && (energyAt < lo || energyAt > hi)) {
-    problems.push({ where: '--energy-at', message: `station ${energyAt} is outside the channel (stations ${lo} to ${hi})`, value: energyAt });
+    problems.push({ where: '--energy-at', message: msg.flagStationOutside(energyAt, lo, hi), value: energyAt });
   }
   if (energyFlow !== undefined && !flows.some((f) => f.id === energyFlow)) {
-    problems.push({ where: '--energy-flow', message: `no flow named ${JSON.stringify(energyFlow)}; the flows are ${flows.map((f) => f.id).join(', ')}`, value: energyFlow });
+    problems.push({ where: '--energy-flow', message: msg.noFlowNamed(energyFlow, flows.map((f) => f.id)), value: energyFlow });
   }
   if (problems.length > 0) throw new InputError(problems);
 }

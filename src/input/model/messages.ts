@@ -1,7 +1,9 @@
 /**
  * Every user-facing message of the model and flag checks (after vega-lite's log/message module): one function
  * per message, so wording is reviewed in one place and tests pin it exactly. A message says what was found
- * and what is accepted; the place (JSON path or flag) is the Problem's `where`.
+ * and what is accepted; the place (JSON path or flag) is the Problem's `where`. The lines the command line
+ * prints around a run (what was written where, notes, progress labels, the heading of an error) are here too,
+ * at the end: src/cli writes no wording of its own.
  */
 import {
   alphaRange,
@@ -257,8 +259,80 @@ export const flagNotForShape = (shape: string, allowed: readonly string[]): stri
 export const boundaryFlag = (got: unknown): string =>
   expected('"normal", "critical" or a depth greater than 0', got);
 
+/** A report flag (--sections, --energy-at, --energy-flow) given without --out. */
+export const reportFlagNeedsOut = (): string => 'draws a chart of the report: use it with --out DIR';
+
+/** A station of --sections or --energy-at off the computed channel. */
+export const flagStationOutside = (station: number, from: number, to: number): string =>
+  `station ${station} is outside the channel (stations ${from} to ${to})`;
+
+/** --energy-flow naming no flow of the run. */
+export const noFlowNamed = (name: string, known: readonly string[]): string =>
+  `no flow named ${JSON.stringify(name)}; the flows are ${known.join(', ')}`;
+
+export const marksRequired = (): string => flagRequired('a CSV file of high-water marks (station, elevation, flow[, weight])');
+
+export const stationsRequired = (): string => flagRequired('a list of stations like 120,480');
+
+export const dischargesRequired = (): string => flagRequired('a list like 2,5,10 or a range from:to:step like 1:20:1');
+
+/** A data file named by a flag (--flows, --marks): the Problem's `where` is the flag. */
+export const fileNameNeeded = (): string => 'needs a file name';
+
+export const flagFileMissing = (path: string): string => `${path}: no such file`;
+
+export const flagFileIsFolder = (path: string): string => `${path}: a folder, not a file`;
+
+export const flagFileUnreadable = (path: string, reason: string): string => `${path}: cannot be read (${reason})`;
+
 export const forceHintFlag = '; pass --force if the value is intended';
 export const forceHintModel = '; run with --force if the value is intended';
+
+// ---- what the command line prints ---------------------------------------------------------------------
+
+const plural = (count: number, word: string): string => `${count} ${word}${count === 1 ? '' : 's'}`;
+
+/** A note beside a result (a chart not drawn, flows replaced), printed on its own line. */
+export const note = (text: string): string => `note: ${text}`;
+
+export const reportWritten = (report: string, charts: number, dir: string): string =>
+  `report written to ${report} (with result.json, stations.csv and ${plural(charts, 'chart')} in ${dir})`;
+
+export const sensitivityWritten = (dir: string): string => `sensitivity.csv and charts/sensitivity-profile (.vl.json, .svg, .png) written to ${dir}`;
+
+export const calibrationWritten = (dir: string): string =>
+  `calibration.json, marks.csv and charts/calibration-profile (.vl.json, .svg, .png) written to ${dir}`;
+
+export const ratingWritten = (dir: string): string => `rating.json, rating.csv and charts/rating-curve (.vl.json, .svg, .png) written to ${dir}`;
+
+export const stationTableWritten = (file: string): string => `station table written to ${file}`;
+
+export const markTableWritten = (file: string): string => `mark table written to ${file}`;
+
+export const ratingTableWritten = (file: string): string => `rating table written to ${file}`;
+
+export const flowsReplaced = (count: number, file: string): string => `${plural(count, 'flow')} from ${file} replace the model's flows`;
+
+/** Progress-bar labels: what was just finished. */
+export const progressFlow = (id: string): string => `flow ${id}`;
+
+export const progressCase = (label: string): string => `case ${label}`;
+
+export const progressFitStep = (step: number, cost: number): string => `fit step ${step}, Σw·r²/2 = ${cost.toExponential(2)}`;
+
+/** The first line of an error report; the problems follow, one a line. */
+export const invalidModelHeading = (file: string, count: number): string => `gvf: ${file} is not a valid model (${plural(count, 'problem')}):`;
+
+export const badInputHeading = (count: number): string => `gvf: bad input (${plural(count, 'problem')}):`;
+
+export const cannotBeComputed = (why: string): string => `gvf: cannot be computed: ${why}`;
+
+export const computationFailed = (why: string): string => `gvf: the computation failed: ${why}`;
+
+export const unexpectedError = (why: string): string => `gvf: unexpected error: ${why} (set GVF_DEBUG=1 for details)`;
+
+/** Printed by commander after a flag it refuses (unknown option, missing value, bad choice). */
+export const helpAfterError = '(run gvf --help, or gvf <command> --help, for the options)';
 
 function round(value: number): string {
   return String(Math.round(value * 1e6) / 1e6);
