@@ -11,6 +11,9 @@ export const depthAbsoluteTolerance = 1e-12;
 export const rootMaxIterations = 200;
 /** Number of sample intervals when scanning a depth range for sign changes or minima. */
 export const scanSamples = 400;
+/** Number of evenly spaced sample intervals of a specific-energy curve, besides a sample at each of the section's break
+ *  depths (where its formulas change, and where narrow extrema arise); a section without break depths gets scanSamples. */
+export const energyCurveSamples = 200;
 /** Smallest depth considered (fraction of the length scale): flow thinner than this is treated as dry. */
 export const minimumDepthFraction = 1e-9;
 /** Slopes within this of the critical slope (relative) classify as critical. */

@@ -59,6 +59,12 @@ export interface Section {
   subsectionsInto?(depth: number, out: Float64Array, rates?: Float64Array): number;
   /** the most subsections `subsectionsInto` can write (present with it) */
   readonly subsectionLimit?: number;
+  /**
+   * Optional: the depths above the lowest point where the section's formulas change (for a points section, the
+   * elevation of every ground point and zone boundary): the curves of depth have their kinks, and compound sections
+   * their sudden changes of α, only there, so a scan for extrema samples them.
+   */
+  readonly breakDepths?: readonly number[];
   /** the defining dimensions, for tables and reports (e.g. { bottomWidth: 3, sideSlopeLeft: 2 }) */
   describe(): Readonly<Record<string, number | string>>;
 }

@@ -1,5 +1,5 @@
 /**
- * The specific-energy curve E(y) = y + Q²·α/(2gA²) of a section sampled at the depth table's depths, in its
+ * The specific-energy curve E(y) = y + Q²·α/(2gA²) of a section, sampled evenly and at the section's break depths, in its
  * discharge-free parts, for the critical-depth and alternate-depth searches of irregular and compound sections:
  * the weight α/(2gA²) (E = y + Q²·weight), the slope weight (dE/dy = 1 + Q²·slopeWeight, with dα/dy from the
  * subsections' perimeter rates, hydraulicSection.ts conveyanceSlopesInto) and the index of the sampled curve's
@@ -7,6 +7,8 @@
  * numbers per sample): a long survey keeps one per cross-section.
  */
 import { conveyanceAndAlpha, conveyanceSlopesInto, type HydraulicSection, SlopeSlot } from './hydraulicSection.js';
+import { energyCurveSamples } from '../core/tolerances.js';
+import { smallestDepth } from './depthSearch.js';
 import { keptTable, sampleDepths } from './depthTable.js';
 import { type ExtremaIndex, extremaIndex } from './extremaIndex.js';
 
@@ -23,8 +25,31 @@ export interface EnergyCurve {
   readonly index: ExtremaIndex | undefined;
 }
 
+/**
+ * The curve's sample depths: energyCurveSamples even intervals from the smallest depth to `top`, and every break
+ * depth of the section in between (merged in order; a break within a rounding distance of a sample is that sample).
+ * Without break depths, the depth table's scanSamples intervals.
+ */
+export function curveDepths(hs: HydraulicSection, top: number): Float64Array {
+  const breaks = hs.section.breakDepths;
+  if (breaks === undefined) return sampleDepths(hs, top);
+  const lo = smallestDepth(hs.section);
+  const merged: number[] = [];
+  const gap = 1e-9 * (top - lo);
+  let b = 0;
+  for (let i = 0; i <= energyCurveSamples; i++) {
+    const y = i === energyCurveSamples ? top : lo + ((top - lo) * i) / energyCurveSamples;
+    while (b < breaks.length && breaks[b]! < y) {
+      const d = breaks[b++]!;
+      if (d > lo && d - merged[merged.length - 1]! > gap && y - d > gap) merged.push(d);
+    }
+    merged.push(y);
+  }
+  return Float64Array.from(merged);
+}
+
 function build(hs: HydraulicSection, top: number, discharge: number | undefined): EnergyCurve {
-  const depth = sampleDepths(hs, top);
+  const depth = curveDepths(hs, top);
   const n = depth.length;
   const weight = new Float64Array(n);
   const slopeWeight = new Float64Array(n);

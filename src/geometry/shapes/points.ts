@@ -458,6 +458,7 @@ export function points(spec: PointsSpec): PointsSection {
     subsections,
     subsectionsInto,
     subsectionLimit: zones.length,
+    breakDepths: Array.from(levels),
     describe: () => ({
       shape: 'points',
       points: copied.length,
