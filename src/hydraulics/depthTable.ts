@@ -35,26 +35,36 @@ export function sampleDepths(hs: HydraulicSection, top: number): Float64Array {
   return depth;
 }
 
+/** Where one kind of table is kept: per section and key, and per HydraulicSection that asked (the fast path). */
+export interface TableStore<T> {
+  readonly bySection: WeakMap<HydraulicSection['section'], Map<string, T>>;
+  /** the usual case first: this very HydraulicSection asked before (a profile asks at every station and flow) */
+  readonly byHydraulicSection: WeakMap<HydraulicSection, T>;
+}
+
+export function tableStore<T>(): TableStore<T> {
+  return { bySection: new WeakMap(), byHydraulicSection: new WeakMap() };
+}
+
 /**
  * A table kept per section, friction law, unit system and fixed α, up to the section's own limit; built anew
  * (not kept) for Darcy–Weisbach, whose conveyance depends on the discharge, and for a range below `top` other
  * than the section's limit (an unbounded section's range depends on the discharge).
  */
 export function keptTable<T>(
-  store: WeakMap<HydraulicSection['section'], Map<string, T>>,
+  store: TableStore<T>,
   hs: HydraulicSection,
   top: number,
   discharge: number,
   build: (hs: HydraulicSection, top: number, discharge: number | undefined) => T,
 ): T {
   if (hs.law === 'darcy-weisbach' || top !== hs.section.maxDepth) return build(hs, top, discharge);
-  // the usual case first: this very HydraulicSection asked before (a profile asks at every station and flow)
-  const known = lastByHydraulicSection.get(hs) as { store: unknown; table: T } | undefined;
-  if (known !== undefined && known.store === store) return known.table;
-  let byLaw = store.get(hs.section);
+  const known = store.byHydraulicSection.get(hs);
+  if (known !== undefined) return known;
+  let byLaw = store.bySection.get(hs.section);
   if (!byLaw) {
     byLaw = new Map();
-    store.set(hs.section, byLaw);
+    store.bySection.set(hs.section, byLaw);
   }
   const key = `${hs.law}|${hs.units.system}|${hs.alpha ?? ''}`;
   let table = byLaw.get(key);
@@ -62,12 +72,9 @@ export function keptTable<T>(
     table = build(hs, top, undefined);
     byLaw.set(key, table);
   }
-  lastByHydraulicSection.set(hs, { store, table });
+  store.byHydraulicSection.set(hs, table);
   return table;
 }
-
-/** The table each HydraulicSection was last given, with the store it came from (a fast path before the keyed look-up). */
-const lastByHydraulicSection = new WeakMap<HydraulicSection, { store: unknown; table: unknown }>();
 
 function build(hs: HydraulicSection, top: number, discharge: number | undefined): DepthTable {
   const depth = sampleDepths(hs, top);
@@ -91,7 +98,7 @@ function build(hs: HydraulicSection, top: number, discharge: number | undefined)
   return { depth, area, firstMoment, conveyance, forceWeight, forceSlopeWeight, forceIndex: extremaIndex(firstMoment, forceWeight) };
 }
 
-const kept = new WeakMap<HydraulicSection['section'], Map<string, DepthTable>>();
+const kept = tableStore<DepthTable>();
 
 /** The table from the smallest depth up to `top` (finite), for this discharge (see keptTable). */
 export function depthTable(hs: HydraulicSection, top: number, discharge: number): DepthTable {

@@ -9,7 +9,7 @@
 import { conveyanceAndAlpha, conveyanceSlopesInto, type HydraulicSection, SlopeSlot } from './hydraulicSection.js';
 import { energyCurveSamples } from '../core/tolerances.js';
 import { smallestDepth } from './depthSearch.js';
-import { keptTable, sampleDepths } from './depthTable.js';
+import { keptTable, sampleDepths, tableStore } from './depthTable.js';
 import { type ExtremaIndex, extremaIndex } from './extremaIndex.js';
 
 export interface EnergyCurve {
@@ -82,7 +82,7 @@ function build(hs: HydraulicSection, top: number, discharge: number | undefined)
   return { depth, weight, slopeWeight, index: extremaIndex(depth, weight) };
 }
 
-const kept = new WeakMap<HydraulicSection['section'], Map<string, EnergyCurve>>();
+const kept = tableStore<EnergyCurve>();
 
 /** The curve from the smallest depth up to `top` (finite), for this discharge (kept as depthTable's tables are). */
 export function energyCurve(hs: HydraulicSection, top: number, discharge: number): EnergyCurve {
