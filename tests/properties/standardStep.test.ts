@@ -22,6 +22,9 @@ import type { HydraulicSection } from '../../src/hydraulics/hydraulicSection.js'
 import { normalDepth } from '../../src/hydraulics/normalDepth.js';
 import { flowState } from '../../src/hydraulics/state.js';
 import { computeProfile } from '../../src/profile/engine.js';
+import { points } from '../../src/geometry/shapes/points.js';
+import { hydraulicSection } from '../../src/hydraulics/hydraulicSection.js';
+import { US } from '../../src/core/units.js';
 import { pointState } from '../../src/profile/energy.js';
 import { energyStep } from '../../src/profile/standardStep.js';
 import type { StretchSpec } from '../../src/profile/stretch.js';
@@ -111,21 +114,34 @@ function integrateEnergy(hs: HydraulicSection, q: number, slope: number, yc: num
     const ya = y;
     const f = (trial: number) => residual(hs, q, slope, xa, ya, xb, trial);
     const [lo, hi] = subcritical ? [yc, top] : [yc * 1e-3, yc];
-    const flo = f(lo);
-    const fhi = f(hi);
-    if (!(flo * fhi <= 0)) return null;
-    y = brentRoot(f, lo, hi, { xTolerance: 1e-12 * yc, what: 'independent energy balance' });
+    // where specific energy has several extrema on the branch (a section with two critical depths, E rising and
+    // falling again over a wide shelf) the equation has several roots there: the profile is continuous, so the root
+    // nearest the previous depth is its own. Search outward from it, the width doubling, for the nearest sign change.
+    const f0 = f(Math.min(Math.max(ya, lo), hi));
+    const y0 = Math.min(Math.max(ya, lo), hi);
+    let best: number | null = f0 === 0 ? y0 : null;
+    for (let w = 1e-6 * Math.max(yc, ya); best === null && w < 2 * (hi - lo); w *= 2) {
+      for (const b of [Math.max(lo, y0 - w), Math.min(hi, y0 + w)]) {
+        if (b === y0) continue;
+        const fb = f(b);
+        if (f0 * fb > 0) continue;
+        const root = brentRoot(f, Math.min(y0, b), Math.max(y0, b), { xTolerance: 1e-12 * yc, what: 'independent energy balance' });
+        if (best === null || Math.abs(root - ya) < Math.abs(best - ya)) best = root;
+      }
+    }
+    if (best === null) return null;
+    y = best;
   }
   return y;
 }
 
-function balanceProblems(result: FlowResult, reaches: readonly PrismaticReachInput[], system: 'SI' | 'US'): string[] {
+function balanceProblems(result: FlowResult, reaches: readonly PrismaticReachInput[], system: 'SI' | 'US', every?: number): string[] {
   const problems: string[] = [];
   const q = result.discharge;
   const s = result.stations;
   const jumpStations = new Set(result.jumps.map((j) => j.station));
-  // at most about 25 intervals per run, spread along the channel (the independent solve is costly)
-  const every = Math.max(1, Math.floor(s.length / 25));
+  // at most about 25 intervals per run, spread along the channel (the independent solve is costly), unless told
+  every ??= Math.max(1, Math.floor(s.length / 25));
   for (let i = 0; i + 1 < s.length; i += every) {
     const a = s[i]!;
     const b = s[i + 1]!;
@@ -174,6 +190,30 @@ describe('the standard step energy equation', () => {
       ),
       settings(1000),
     );
+  });
+
+  it('computeProfile(standard-step) balances energy where the section has two critical depths (the root continuous with the profile)', () => {
+    // found by the long property run (seed 675824872): an H2 profile whose depth crosses nearly flat banks 12.03–12.40 ft
+    // above a flat bed, where the top width grows fivefold and E has a second minimum (critical depths 9.77 and 12.74 ft
+    // for 9,785 ft³/s), so the energy equation has several roots on the subcritical branch. The check had taken any of
+    // them (Brent on the whole branch) and reported a 1.1 ft miss; it now takes the root nearest the previous depth, as
+    // a continuous profile does, and the engine's depths balance to the goal
+    const pts: [number, number][] = [[0, 15.93], [0, 12.4], [12.69, 12.35], [25.38, 12.29], [38.06, 12.24], [50.75, 12.19], [63.44, 12.14], [76.13, 12.08], [88.81, 12.03], [101.5, 0], [114.19, 0], [126.88, 0], [139.56, 0], [152.25, 0], [164.94, 12.03], [177.63, 12.08], [190.31, 12.14], [203, 12.19], [215.69, 12.24], [228.38, 12.29], [241.06, 12.35], [253.75, 12.4], [253.75, 15.93]];
+    const hs = hydraulicSection(points({ points: pts, roughness: 0.01 }), 'manning', US);
+    const reaches: PrismaticReachInput[] = [
+      { id: 'reach 1', section: hs, length: 1721.64, slope: 0 },
+      { id: 'reach 2', section: hs, length: 430.41, slope: 0.05 },
+    ];
+    const result = computeProfile({
+      units: US,
+      reaches,
+      discharge: 9784.76,
+      flowId: 'regression',
+      boundaries: { upstream: { type: 'critical' }, downstream: { type: 'stage', elevation: 14.34 } },
+      method: 'standard-step',
+      outputSpacing: 5,
+    });
+    expect(balanceProblems(result, reaches, 'US', 1)).toEqual([]);
   });
 
   it('computeProfile(standard-step) balances energy between neighbouring reported stations to the accuracy goal', () => {
