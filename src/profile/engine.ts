@@ -689,6 +689,14 @@ export function computeProfile(input: ProfileInput, options: EngineOptions = {})
         const hsA = sectionAt(piece, xa);
         const da = force(hsA, ya, q) - force(hsA, before ?? criticalAt(piece, xa), q);
         if (before === null && !(da > 0)) {
+          // held where the subcritical profile begins: at xb, the node it was set to critical depth at (placing it
+          // at xa, a node no subcritical profile reaches, moved the toe by a whole interval as the resolution or the
+          // roughness changed); at xa only where the supercritical profile does not reach xb
+          if (i < sup.length) {
+            const hsB = sectionAt(piece, xb);
+            held.push({ station: xb, depth: sup[i]!, critical: yb });
+            return { toe: xb, hs: hsB, y1: sup[i]!, y2: yb, held: true };
+          }
           held.push({ station: xa, depth: ya, critical: criticalAt(piece, xa) });
           return { toe: xa, hs: hsA, y1: ya, y2: criticalAt(piece, xa), held: true };
         }
