@@ -13,13 +13,16 @@
  * - the toe moves by less than one survey interval (15 m at the jump) between neighbouring multipliers: the water
  *   surface follows the roughness without jumps of its own (common practice: a model's answer should not hinge on
  *   a small change of n).
+ * And the same survey read as one reach (no split at the change of slope) gives the sample's two-reach result.
  */
+import { readFileSync } from 'node:fs';
 import { join } from 'node:path';
 import { describe, expect, it } from 'vitest';
 import { specificForce } from '../../src/hydraulics/specificForce.js';
 import { readModelFile } from '../../src/input/model/parse.js';
 import { runModel } from '../../src/run.js';
-import { assertRelative } from '../helpers/assert.js';
+import { assertInDelta, assertRelative } from '../helpers/assert.js';
+import { modelFolder } from './folder.js';
 
 const file = join(import.meta.dirname, '..', '..', 'samples', 'survey-drain', 'model.json');
 const model = readModelFile(file);
@@ -89,5 +92,40 @@ describe('runModel(samples/survey-drain, roughnessMultiplier on the steep reach)
         expect(Math.abs(b - a), `${model.flows[f]!.id}, m ${multipliers[r - 1]} → ${multipliers[r]}`).toBeLessThan(15);
       }
     }
+  });
+});
+
+describe('runModel(samples/survey-drain as one surveyed reach)', () => {
+  it('runModel: the whole survey as one reach finds the control and the jump the two-reach sample has, and the same water surface', () => {
+    // the sample splits its survey at station 320, where the bed changes from 0.02 to 0.002; read as one reach, the
+    // reach is classed interval by interval (a steep part above 320, a mild one below) and must give the same profile:
+    // the same sections, beds and boundaries, only the reach break moved inside the survey
+    const dir = join(import.meta.dirname, '..', '..', 'samples', 'survey-drain');
+    const read = (name: string) => readFileSync(join(dir, 'survey', name), 'utf8').trim().split('\n');
+    const upper = read('stations-upper.csv');
+    const lower = read('stations-lower.csv');
+    const stations = [...upper.slice(1, -1), ...lower.slice(2)].join('\n');
+    const one = JSON.parse(readFileSync(file, 'utf8')) as Record<string, unknown>;
+    delete one.$schema;
+    one.reaches = [{ id: 'drain', survey: { stations: 'survey/stations.csv', crossSections: 'survey/sections.csv', stationing: 'increasing-upstream' } }];
+    const folder = modelFolder(one, { 'survey/stations.csv': `${stations}\n`, 'survey/sections.csv': readFileSync(join(dir, 'survey', 'sections.csv'), 'utf8') });
+    const single = runModel(readModelFile(folder.model), { modelFile: folder.model }).result;
+    const split = runs[1]!.result;
+    single.flows.forEach((flow, f) => {
+      const reference = split.flows[f]!;
+      const reach = flow.reaches[0]!;
+      expect(reach.parts!.map((p) => [p.slopeClass, p.from, p.to]), flow.id).toEqual([
+        ['steep', 400, 320],
+        ['mild', 320, 0],
+      ]);
+      expect(reach.profiles.map((p) => p.type), flow.id).toEqual(reference.reaches.flatMap((r) => r.profiles.map((p) => p.type)));
+      expect(flow.jumps.length, flow.id).toBe(reference.jumps.length);
+      assertInDelta(flow.jumps[0]!.station, reference.jumps[0]!.station, 1e-6, `${flow.id} toe`);
+      for (const s of reference.stations) {
+        const t = flow.stations.find((x) => Math.abs(x.station - s.station) < 1e-6 && Math.abs(x.depth - s.depth) < 0.01);
+        expect(t, `${flow.id} station ${s.station}`).toBeDefined();
+        assertInDelta(t!.wsel, s.wsel, 1e-9, `${flow.id} station ${s.station}`);
+      }
+    });
   });
 });
