@@ -24,6 +24,7 @@ import type {
   FlowResult,
   JumpResult,
   ProfileStop,
+  ProfileStretch,
   ProfileType,
   Regime,
   ReachPart,
@@ -997,7 +998,7 @@ export function computeProfile(input: ProfileInput, options: EngineOptions = {})
       criticalDepth: cls.criticalDepth,
       ...(reach.discharge !== undefined ? { discharge: reach.discharge } : {}),
       profiles: info
-        ? profileStretchesBy(stationsOwn, (i) => surveyedStretchType(info, own[i]!, own[i + 1]!, reach.discharge ?? q, band))
+        ? surveyedStretches(info, own, reach.discharge ?? q, band)
         : profileStretches(cls, stationsOwn, own.map((e) => e.depth), band),
       ...(info ? { parts: reachParts(info) } : {}),
     };
@@ -1025,20 +1026,51 @@ export function computeProfile(input: ProfileInput, options: EngineOptions = {})
 }
 
 /**
- * The profile type of the stretch between two entries of a surveyed reach, from the class of the interval it lies
+ * The stretches of a surveyed reach's profile (its entries in order): each takes the type from the class of the
+ * interval it lies in and the zone of its depths there. An entry's distance from normal depth is estimated once
+ * for the slope of the interval downstream of it and once for the one upstream (where they differ), not per stretch.
+ */
+function surveyedStretches(info: SurveyInfo, own: readonly Entry[], discharge: number, band: (depth: number) => number): ProfileStretch[] {
+  const nodes = info.nodes;
+  const intervals = own.map((e, i) => (i + 1 < own.length ? intervalOf(nodes, 0.5 * (e.station + own[i + 1]!.station)) : -1));
+  const near = own.map((e) => nearestNode(nodes, e.station));
+  // per entry, the estimate for the interval last asked (stretches in order ask each entry for at most two intervals)
+  const askedFor = new Int32Array(own.length).fill(-1);
+  const estimate = new Float64Array(own.length);
+  const distance = (i: number, j: number): number | null => {
+    if (askedFor[i] === j) return estimate[i]!;
+    const d = aboveNormal(nodes[near[i]!]!.section, own[i]!.depth, discharge, intervalSlope(nodes, j));
+    if (d === null) return null;
+    askedFor[i] = j;
+    estimate[i] = d;
+    return d;
+  };
+  return profileStretchesBy(
+    own.map((e) => e.station),
+    (i) => surveyedStretchType(info, own[i]!, own[i + 1]!, near[i]!, near[i + 1]!, intervals[i]!, band, (k) => distance(k === 0 ? i : i + 1, intervals[i]!)),
+  );
+}
+
+/**
+ * The profile type of the stretch between two entries of a surveyed reach, from the class of the interval j it lies
  * in and the zone of its depths there: the mean depth against the mean of the ends' critical depths, and against
  * normal depth on the interval's slope by the mean of the ends' estimated distances from it (surveyedClass.ts).
  */
-function surveyedStretchType(info: SurveyInfo, a: Entry, b: Entry, discharge: number, band: (depth: number) => number): ProfileType {
-  const nodes = info.nodes;
-  const j = intervalOf(nodes, 0.5 * (a.station + b.station));
-  const slope = intervalSlope(nodes, j);
-  const ja = nearestNode(nodes, a.station);
-  const jb = nearestNode(nodes, b.station);
+function surveyedStretchType(
+  info: SurveyInfo,
+  a: Entry,
+  b: Entry,
+  ja: number,
+  jb: number,
+  j: number,
+  band: (depth: number) => number,
+  /** y − yn at end 0 (a) or 1 (b) on interval j's slope; null without a normal depth */
+  distance: (end: 0 | 1) => number | null,
+): ProfileType {
   const mean = 0.5 * (a.depth + b.depth);
   const yc = 0.5 * (info.critical(ja) + info.critical(jb));
-  const da = aboveNormal(nodes[ja]!.section, a.depth, discharge, slope);
-  const db = aboveNormal(nodes[jb]!.section, b.depth, discharge, slope);
+  const da = distance(0);
+  const db = distance(1);
   const yn = da === null || db === null ? null : mean - 0.5 * (da + db);
   const cls: ReachClass = { normalDepth: yn !== null && Number.isFinite(yn) ? yn : null, criticalDepth: yc, slopeClass: info.classes[j]! };
   // a depth infinitely far from normal depth (conveyance not rising with depth): only its side matters

@@ -19,7 +19,7 @@
  * drowns it, as at a break between two prismatic reaches (Chow 1959 §9-3, Henderson 1966 §4.3).
  */
 import { criticalSlopeRelativeBand, horizontalSlope, normalEstimateStep } from '../core/tolerances.js';
-import { conveyance, type HydraulicSection } from '../hydraulics/hydraulicSection.js';
+import { conveyance, conveyanceSlopesInto, type HydraulicSection, SlopeSlot } from '../hydraulics/hydraulicSection.js';
 import type { SlopeClass } from '../results/types.js';
 import { flowLength } from './surveyed.js';
 import type { SurveyNode } from './types.js';
@@ -77,18 +77,28 @@ export function controlBreaks(classes: readonly SlopeClass[]): number[] {
   return out;
 }
 
+const slopes = new Float64Array(6);
+
 /**
  * y − yn at depth y in a section on bed slope S0 > 0, by the Newton estimate of the module comment (exact in sign);
  * null where S0 ≤ 0 (no normal depth).
  */
 export function aboveNormal(hs: HydraulicSection, depth: number, discharge: number, slope: number): number | null {
   if (!(slope > 0)) return null;
-  const k = conveyance(hs, depth, discharge);
-  // a central difference of ln K, kept inside the section (one-sided at its top)
-  const h = normalEstimateStep * depth;
-  const up = Math.min(depth + h, hs.section.maxDepth);
-  const down = depth - h;
-  const logSlope = Math.log(conveyance(hs, up, discharge) / conveyance(hs, down, discharge)) / (up - down);
+  let k: number;
+  let logSlope: number;
+  if (conveyanceSlopesInto(hs, depth, slopes)) {
+    // K and dK/dy from the subsections' perimeter rates, in one evaluation
+    k = slopes[SlopeSlot.conveyance]!;
+    logSlope = slopes[SlopeSlot.conveyanceSlope]! / k;
+  } else {
+    // a central difference of ln K, kept inside the section (one-sided at its top)
+    k = conveyance(hs, depth, discharge);
+    const h = normalEstimateStep * depth;
+    const up = Math.min(depth + h, hs.section.maxDepth);
+    const down = depth - h;
+    logSlope = Math.log(conveyance(hs, up, discharge) / conveyance(hs, down, discharge)) / (up - down);
+  }
   const logRatio = 2 * Math.log(discharge / k) - Math.log(slope);
   if (!(logSlope > 0)) return logRatio < 0 ? Infinity : logRatio > 0 ? -Infinity : 0;
   return logRatio / (-2 * logSlope);

@@ -12,7 +12,9 @@
 import { describe, expect, it } from 'vitest';
 import { SI } from '../../src/core/units.js';
 import type { Section } from '../../src/geometry/section.js';
+import { points } from '../../src/geometry/shapes/points.js';
 import { hydraulicSection, type HydraulicSection } from '../../src/hydraulics/hydraulicSection.js';
+import { normalDepth } from '../../src/hydraulics/normalDepth.js';
 import { profileType } from '../../src/profile/classify.js';
 import { aboveNormal, controlBreaks, criticalSlopeOf, intervalClasses, slopeClassAgainst, surveyParts } from '../../src/profile/surveyedClass.js';
 import { computeProfile } from '../../src/profile/engine.js';
@@ -73,6 +75,24 @@ describe('surveyedClass against the wide-channel closed forms', () => {
     }
     expect(aboveNormal(hs, 1, q, 0)).toBeNull();
     expect(aboveNormal(hs, 1, q, -0.001)).toBeNull();
+  });
+
+  it('aboveNormal: on a points section (dK/dy from its perimeter rates) y − yn agrees with normalDepth to second order', () => {
+    // an invented earth channel drawn as points with three roughness zones; normalDepth is checked against Manning's
+    // closed forms in tests/hydraulics
+    const earth = hydraulicSection(
+      points({ points: [[0, 3], [4, 1.5], [6, 0], [10, 0], [12, 1.5], [16, 3]], roughness: [[0, 0.05], [4, 0.03], [12, 0.05]] }),
+      'manning',
+      SI,
+    );
+    const discharge = 12;
+    for (const slope of [0.0008, 0.01]) {
+      const yn = normalDepth(earth, discharge, slope)!;
+      for (const offset of [-0.004, -0.0005, 0.0005, 0.004]) {
+        const y = yn + offset;
+        assertInDelta(aboveNormal(earth, y, discharge, slope)!, offset, (offset * offset) / y + 1e-9, `S0 ${slope}, y − yn ${offset}`);
+      }
+    }
   });
 
   it('intervalClasses, surveyParts and controlBreaks: each interval by its own slope, a control where steep follows mild', () => {
