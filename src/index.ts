@@ -70,6 +70,7 @@ export type {
   JumpType,
   ProfileStretch,
   ProfileType,
+  ReachPart,
   ReachResult,
   Regime,
   RunResult,

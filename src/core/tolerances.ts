@@ -58,6 +58,14 @@ export const nearCriticalBand = 0.3;
 export const nearCriticalFloor = 0.03;
 /** Profile: a depth within this fraction of critical depth (relative) is at critical depth. */
 export const criticalReachFraction = 1e-7;
+/** Profile: the depth step (relative to the depth) of the central difference d ln K/dy in the estimate of a depth's distance
+ *  from normal depth on a surveyed reach (profile/surveyedClass.ts); ln K is smooth, so the difference is accurate to
+ *  about this fraction squared. */
+export const normalEstimateStep = 1e-4;
+/** Profile: a depth within this fraction of critical depth (relative) lies on the boundary between two profile zones and
+ *  takes the zone between normal and critical depth (M2, S2): a depth set to critical depth, or a profile's end at it,
+ *  differs from the critical depth it is compared with by round-off, which must not flip S2 and S1 (or M2 and M3). */
+export const profileCriticalBand = 1e-6;
 /** Profile: a depth within this fraction of normal depth (relative) starts a uniform stretch exactly. */
 export const normalStartFraction = 1e-9;
 /** Profile: largest number of internal steps of one stretch (any method); beyond it the method fails with a NumericalError. */

@@ -401,7 +401,13 @@ function shiftResult(result: FlowResult, shift: number): FlowResult {
   return {
     ...result,
     stations: result.stations.map((s) => ({ ...s, station: s.station + shift })),
-    reaches: result.reaches.map((r) => ({ ...r, from: r.from + shift, to: r.to + shift, profiles: r.profiles.map((p) => ({ ...p, from: p.from + shift, to: p.to + shift })) })),
+    reaches: result.reaches.map((r) => ({
+      ...r,
+      from: r.from + shift,
+      to: r.to + shift,
+      profiles: r.profiles.map((p) => ({ ...p, from: p.from + shift, to: p.to + shift })),
+      ...(r.parts ? { parts: r.parts.map((p) => ({ ...p, from: p.from + shift, to: p.to + shift })) } : {}),
+    })),
     jumps: result.jumps.map((j) => ({ ...j, station: j.station + shift })),
     ...(result.structures ? { structures: result.structures.map((s) => ({ ...s, station: s.station + shift, notes: s.notes.map(text) })) } : {}),
     warnings: result.warnings.map(text),

@@ -4,8 +4,12 @@
  * type from the zone the depth lies in:
  *   mild (yn > yc):  M1 above yn, M2 between, M3 below yc;   steep (yc > yn): S1 above yc, S2 between, S3 below yn;
  *   critical (yn = yc): C1 above, C3 below;   horizontal: H2 above yc, H3 below;   adverse: A2 above yc, A3 below.
- * A stretch within the accuracy goal of normal depth is reported as uniform.
+ * A stretch within the accuracy goal of normal depth is reported as uniform. A depth within round-off of critical
+ * depth (profileCriticalBand) takes the zone between normal and critical depth (M2, S2; C1, H2, A2 as before).
+ * A surveyed reach is classed interval by interval (surveyedClass.ts): profileStretchesBy takes the class at
+ * each place.
  */
+import { profileCriticalBand } from '../core/tolerances.js';
 import { classifySlope, criticalSlope } from '../hydraulics/slopeClass.js';
 import { criticalDepth } from '../hydraulics/criticalDepth.js';
 import { normalDepth } from '../hydraulics/normalDepth.js';
@@ -38,12 +42,13 @@ export function profileType(reach: ReachClass, depth: number, uniformBand: numbe
   if (yn !== null && reach.slopeClass !== 'horizontal' && reach.slopeClass !== 'adverse' && Math.abs(depth - yn) <= uniformBand) {
     return 'uniform';
   }
+  const band = profileCriticalBand * yc;
   switch (reach.slopeClass) {
     case 'mild':
-      if (depth < yc) return 'M3';
+      if (depth < yc - band) return 'M3';
       return yn !== null && depth > yn ? 'M1' : 'M2';
     case 'steep':
-      if (depth > yc) return 'S1';
+      if (depth > yc + band) return 'S1';
       return yn !== null && depth < yn ? 'S3' : 'S2';
     case 'critical':
       return depth >= yc ? 'C1' : 'C3';
@@ -64,13 +69,24 @@ export function profileStretches(
   depths: readonly number[],
   uniformBand: (depth: number) => number,
 ): ProfileStretch[] {
+  return profileStretchesBy(stations, (i) => {
+    const mean = 0.5 * (depths[i]! + depths[i + 1]!);
+    return profileType(reach, mean, uniformBand(mean));
+  });
+}
+
+/**
+ * The stretches of a profile whose class changes along it: `typeOf(i)` gives the type of the interval from
+ * stations[i] to stations[i + 1] (from the class and the zone at that place); equal neighbours merge and
+ * zero-length intervals are skipped, as in profileStretches.
+ */
+export function profileStretchesBy(stations: readonly number[], typeOf: (i: number) => ProfileType): ProfileStretch[] {
   const out: ProfileStretch[] = [];
   for (let i = 0; i + 1 < stations.length; i++) {
     const from = stations[i]!;
     const to = stations[i + 1]!;
     if (to <= from) continue;
-    const mean = 0.5 * (depths[i]! + depths[i + 1]!);
-    const type = profileType(reach, mean, uniformBand(mean));
+    const type = typeOf(i);
     const last = out[out.length - 1];
     if (last && last.type === type && last.to === from) last.to = to;
     else out.push({ type, from, to });

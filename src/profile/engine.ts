@@ -2,8 +2,10 @@
  * computeProfile: the water-surface profile of one flow along a channel of reaches, with mixed flow.
  *
  * Stages (each returns plain data; see the functions below):
- *   1. layout     reaches → pieces (a prismatic stretch between breaks and internal controls), stations, beds
- *   2. classify   normal depth, critical depth, slope class of each reach
+ *   1. layout     reaches → pieces (a prismatic stretch between breaks and internal controls, a surveyed reach split
+ *                 where a steep interval follows one that is not: the flow passes through critical depth there), stations, beds
+ *   2. classify   normal depth, critical depth, slope class of each reach; a surveyed reach interval by interval
+ *                 (surveyedClass.ts), its profile types from the class and zone at each place
  *   3. subcritical sweep, downstream → upstream: from the downstream control, through breaks (critical depth
  *      at a break into a steep reach unless drowned) and internal controls (headwater for the tailwater);
  *      a profile that runs into critical depth stops there
@@ -22,21 +24,25 @@ import type {
   FlowResult,
   JumpResult,
   ProfileStop,
+  ProfileStretch,
+  ProfileType,
   Regime,
+  ReachPart,
   ReachResult,
+  SlopeClass,
   StationResult,
   StructureResult,
 } from '../results/types.js';
-import { classifyReach, profileStretches, type ReachClass } from './classify.js';
+import { classifyReach, profileStretches, profileStretchesBy, profileType, type ReachClass } from './classify.js';
 import { breakStart, downstreamStart, type EndInfo, upstreamStart } from './controls.js';
 import { pointState, type PointState } from './energy.js';
 import { jumpAt, locateToe } from './jump.js';
 import { integrators, referenceIntegrator } from './methods.js';
 import type { FlowRegime, ProfileIntegrator, StretchProfile, StretchSpec } from './stretch.js';
 import type { ControlResponse, InternalControl, ProfileInput, ReachInput, SurveyNode } from './types.js';
-import { surveyedStretch } from './surveyed.js';
+import { flowLength, surveyedStretch } from './surveyed.js';
+import { aboveNormal, controlBreaks, intervalClasses, intervalSlope, surveyParts, type SurveyPart } from './surveyedClass.js';
 import { normalDepth as normalDepthOf } from '../hydraulics/normalDepth.js';
-import { classifySlope } from '../hydraulics/slopeClass.js';
 import { criticalDepth as criticalDepthOf } from '../hydraulics/criticalDepth.js';
 
 /** A stretch of one reach between junctions (reach breaks or internal controls): prismatic, or a surveyed reach. */
@@ -49,15 +55,17 @@ interface Piece {
   readonly to: number;
   /** ascending, from … to (the nodes of a surveyed reach) */
   readonly stations: number[];
-  /** prismatic: the section and slope; surveyed: the first node's section and the mean bed slope */
+  /** prismatic: the section and slope; surveyed: the piece's first node's section and its mean bed slope */
   readonly section: HydraulicSection;
   readonly slope: number;
   /** bed elevation at `to` */
   readonly bedAtEnd: number;
-  /** surveyed reaches: the nodes (one per station) */
+  /** surveyed reaches: the nodes (one per station); a part of the reach's nodes where it is split at a break */
   readonly nodes?: readonly SurveyNode[];
   /** surveyed reaches: node j's critical depth, worked out on first use and kept (most nodes never need it) */
   readonly critical?: (node: number) => number;
+  /** surveyed reaches: the slope class of interval j (nodes j, j + 1) of this piece */
+  readonly intervals?: readonly SlopeClass[];
   /** the control at the downstream end of this piece, if any */
   readonly control?: InternalControl;
   readonly discharge: number;
@@ -129,7 +137,55 @@ function reachLength(reach: ReachInput): number {
   return reach.kind === 'surveyed' ? reach.nodes[reach.nodes.length - 1]!.station - reach.nodes[0]!.station : reach.length;
 }
 
-function layout(input: ProfileInput, classes: ReachClass[]): Piece[] {
+/**
+ * A surveyed reach classed for one discharge: critical depth per node (on first use), each interval's class, its
+ * parts of one class and the nodes where a steep interval follows one that is not (internal controls).
+ */
+interface SurveyInfo {
+  readonly nodes: readonly SurveyNode[];
+  readonly critical: (node: number) => number;
+  readonly classes: readonly SlopeClass[];
+  readonly parts: readonly SurveyPart[];
+  readonly breaks: readonly number[];
+}
+
+function surveyInfo(nodes: readonly SurveyNode[], discharge: number): SurveyInfo {
+  const critical = lazyCriticals(nodes, discharge);
+  const classes = intervalClasses(nodes, critical, discharge);
+  return { nodes, critical, classes, parts: surveyParts(classes), breaks: controlBreaks(classes) };
+}
+
+/** The mean bed slope from node a to node b (bed fall over flow length). */
+function meanSlope(nodes: readonly SurveyNode[], a: number, b: number): number {
+  let length = 0;
+  for (let j = a; j < b; j++) length += flowLength(nodes, j);
+  return (nodes[a]!.bedElevation - nodes[b]!.bedElevation) / length;
+}
+
+/**
+ * A surveyed reach's class for its result: its longest part's (by flow length), with normal and critical depth at
+ * the part's upstream section on the part's mean slope (one part: the reach's first section and mean slope).
+ */
+function surveyedReachClass(info: SurveyInfo, discharge: number): ReachClass {
+  const nodes = info.nodes;
+  let best = info.parts[0]!;
+  let longest = -1;
+  for (const part of info.parts) {
+    let length = 0;
+    for (let j = part.first; j < part.last; j++) length += flowLength(nodes, j);
+    if (length > longest) {
+      longest = length;
+      best = part;
+    }
+  }
+  const slope = meanSlope(nodes, best.first, best.last);
+  const hs = nodes[best.first]!.section;
+  const yc = info.critical(best.first);
+  const yn = slope > 0 ? normalDepthOf(hs, discharge, slope) : null;
+  return { normalDepth: yn, criticalDepth: yc, slopeClass: best.slopeClass };
+}
+
+function layout(input: ProfileInput, classes: ReachClass[], surveys: ReadonlyArray<SurveyInfo | undefined>): Piece[] {
   const reaches = input.reaches;
   // reach extents: surveyed reaches keep their own stations, and must join the reach above
   const starts: number[] = [];
@@ -173,23 +229,32 @@ function layout(input: ProfileInput, classes: ReachClass[]): Piece[] {
     const atEnd = controls.find((c) => Math.abs(c.station - to) <= merge);
     const q = reach.discharge ?? input.discharge;
     if (reach.kind === 'surveyed') {
+      // one piece per stretch between internal controls (a steep interval after one that is not), downstream first;
+      // neighbouring pieces share the node at the break
+      const info = surveys[k]!;
       const nodes = reach.nodes;
-      const last = nodes[nodes.length - 1]!;
-      reversed.push({
-        reachIndex: k,
-        reach,
-        cls: classes[k]!,
-        from,
-        to,
-        stations: nodes.map((n) => n.station),
-        section: nodes[0]!.section,
-        slope: (nodes[0]!.bedElevation - last.bedElevation) / length,
-        bedAtEnd: last.bedElevation,
-        nodes,
-        critical: lazyCriticals(nodes, q),
-        ...(atEnd ? { control: atEnd } : {}),
-        discharge: q,
-      });
+      const cuts = [0, ...info.breaks, nodes.length - 1];
+      for (let c = cuts.length - 2; c >= 0; c--) {
+        const a = cuts[c]!;
+        const b = cuts[c + 1]!;
+        const own = nodes.slice(a, b + 1);
+        reversed.push({
+          reachIndex: k,
+          reach,
+          cls: classes[k]!,
+          from: own[0]!.station,
+          to: own[own.length - 1]!.station,
+          stations: own.map((n) => n.station),
+          section: own[0]!.section,
+          slope: meanSlope(nodes, a, b),
+          bedAtEnd: own[own.length - 1]!.bedElevation,
+          nodes: own,
+          critical: a === 0 ? info.critical : (j) => info.critical(a + j),
+          intervals: info.classes.slice(a, b),
+          ...(atEnd && b === nodes.length - 1 ? { control: atEnd } : {}),
+          discharge: q,
+        });
+      }
       bedBelow = nodes[0]!.bedElevation;
       continue;
     }
@@ -232,7 +297,7 @@ function layout(input: ProfileInput, classes: ReachClass[]): Piece[] {
 
 /** The station where the piece's reach starts. */
 function reachStart(piece: Piece): number {
-  return piece.nodes ? piece.nodes[0]!.station : piece.from;
+  return piece.reach.kind === 'surveyed' ? piece.reach.nodes[0]!.station : piece.from;
 }
 
 /** Critical depth per node for one discharge, each computed on first use. */
@@ -298,17 +363,20 @@ function belowCritical(piece: Piece, station: number, depth: number, discharge: 
   return depth < criticalAt(piece, station) * margin;
 }
 
-/** The class at one end of a piece: a surveyed reach uses the end section with the slope of the end interval. */
+/**
+ * The class at one end of a piece: a surveyed reach uses the end section with the slope of the end interval, and
+ * that interval's class (the one its pieces were split by, so a break's two sides agree with the split).
+ */
 function endClass(piece: Piece, end: 'upstream' | 'downstream'): ReachClass {
   if (!piece.nodes) return piece.cls;
   const discharge = piece.discharge;
   const nodes = piece.nodes;
   const j = end === 'upstream' ? 0 : nodes.length - 2;
-  const slope = (nodes[j]!.bedElevation - nodes[j + 1]!.bedElevation) / (nodes[j + 1]!.station - nodes[j]!.station);
+  const slope = intervalSlope(nodes, j);
   const node = end === 'upstream' ? nodes[0]! : nodes[nodes.length - 1]!;
   const yc = piece.critical!(end === 'upstream' ? 0 : nodes.length - 1);
   const yn = slope > 0 ? normalDepthOf(node.section, discharge, slope) : null;
-  return { normalDepth: yn, criticalDepth: yc, slopeClass: classifySlope(slope, yn, yc) };
+  return { normalDepth: yn, criticalDepth: yc, slopeClass: piece.intervals![j]! };
 }
 
 /* ---------- the integrations ---------- */
@@ -480,13 +548,12 @@ export function computeProfile(input: ProfileInput, options: EngineOptions = {})
   validate(input);
   const q = input.discharge;
   const reaches = input.reaches;
-  const classes = reaches.map((r) =>
-    r.kind === 'surveyed'
-      ? classifyReach(r.nodes[0]!.section, r.discharge ?? q, (r.nodes[0]!.bedElevation - r.nodes[r.nodes.length - 1]!.bedElevation) / reachLength(r))
-      : classifyReach(r.section, r.discharge ?? q, r.slope),
+  const surveys = reaches.map((r) => (r.kind === 'surveyed' ? surveyInfo(r.nodes, r.discharge ?? q) : undefined));
+  const classes = reaches.map((r, k) =>
+    r.kind === 'surveyed' ? surveyedReachClass(surveys[k]!, r.discharge ?? q) : classifyReach(r.section, r.discharge ?? q, r.slope),
   );
   const warnings: string[] = [];
-  const pieces = layout(input, classes);
+  const pieces = layout(input, classes, surveys);
   const ctx: Context = {
     input,
     warnings,
@@ -643,7 +710,10 @@ export function computeProfile(input: ProfileInput, options: EngineOptions = {})
           depth: ys,
           regime: 'critical',
           status: 'used',
-          reason: `the ${above.cls.slopeClass} reach '${above.reach.id}' passes into the ${piece.cls.slopeClass} reach '${piece.reach.id}' through critical depth`,
+          reason:
+            above.reachIndex === piece.reachIndex
+              ? `the ${endClass(above, 'downstream').slopeClass} part of surveyed reach '${piece.reach.id}' passes into its ${endClass(piece, 'upstream').slopeClass} part through critical depth`
+              : `the ${endClass(above, 'downstream').slopeClass} reach '${above.reach.id}' passes into the ${endClass(piece, 'upstream').slopeClass} reach '${piece.reach.id}' through critical depth`,
         });
       }
     }
@@ -689,6 +759,14 @@ export function computeProfile(input: ProfileInput, options: EngineOptions = {})
         const hsA = sectionAt(piece, xa);
         const da = force(hsA, ya, q) - force(hsA, before ?? criticalAt(piece, xa), q);
         if (before === null && !(da > 0)) {
+          // held where the subcritical profile begins: at xb, the node it was set to critical depth at (placing it
+          // at xa, a node no subcritical profile reaches, moved the toe by a whole interval as the resolution or the
+          // roughness changed); at xa only where the supercritical profile does not reach xb
+          if (i < sup.length) {
+            const hsB = sectionAt(piece, xb);
+            held.push({ station: xb, depth: sup[i]!, critical: yb });
+            return { toe: xb, hs: hsB, y1: sup[i]!, y2: yb, held: true };
+          }
           held.push({ station: xa, depth: ya, critical: criticalAt(piece, xa) });
           return { toe: xa, hs: hsA, y1: ya, y2: criticalAt(piece, xa), held: true };
         }
@@ -908,6 +986,9 @@ export function computeProfile(input: ProfileInput, options: EngineOptions = {})
     const own = final.filter((_, p) => pieces[p]!.reachIndex === k).flat();
     const from = pieces.find((p) => p.reachIndex === k)!.from;
     const to = from + reachLength(reach);
+    const band = (d: number) => accuracyFor(input.units.system, d);
+    const info = surveys[k];
+    const stationsOwn = own.map((e) => e.station);
     return {
       id: reach.id,
       from,
@@ -916,12 +997,10 @@ export function computeProfile(input: ProfileInput, options: EngineOptions = {})
       normalDepth: cls.normalDepth,
       criticalDepth: cls.criticalDepth,
       ...(reach.discharge !== undefined ? { discharge: reach.discharge } : {}),
-      profiles: profileStretches(
-        cls,
-        own.map((e) => e.station),
-        own.map((e) => e.depth),
-        (d) => accuracyFor(input.units.system, d),
-      ),
+      profiles: info
+        ? surveyedStretches(info, own, reach.discharge ?? q, band)
+        : profileStretches(cls, stationsOwn, own.map((e) => e.depth), band),
+      ...(info ? { parts: reachParts(info) } : {}),
     };
   });
   const result: FlowResult = {
@@ -944,6 +1023,70 @@ export function computeProfile(input: ProfileInput, options: EngineOptions = {})
   };
   if (structures.length > 0) result.structures = structures;
   return result;
+}
+
+/**
+ * The stretches of a surveyed reach's profile (its entries in order): each takes the type from the class of the
+ * interval it lies in and the zone of its depths there. An entry's distance from normal depth is estimated once
+ * for the slope of the interval downstream of it and once for the one upstream (where they differ), not per stretch.
+ */
+function surveyedStretches(info: SurveyInfo, own: readonly Entry[], discharge: number, band: (depth: number) => number): ProfileStretch[] {
+  const nodes = info.nodes;
+  const intervals = own.map((e, i) => (i + 1 < own.length ? intervalOf(nodes, 0.5 * (e.station + own[i + 1]!.station)) : -1));
+  const near = own.map((e) => nearestNode(nodes, e.station));
+  // per entry, the estimate for the interval last asked (stretches in order ask each entry for at most two intervals)
+  const askedFor = new Int32Array(own.length).fill(-1);
+  const estimate = new Float64Array(own.length);
+  const distance = (i: number, j: number): number | null => {
+    if (askedFor[i] === j) return estimate[i]!;
+    const d = aboveNormal(nodes[near[i]!]!.section, own[i]!.depth, discharge, intervalSlope(nodes, j));
+    if (d === null) return null;
+    askedFor[i] = j;
+    estimate[i] = d;
+    return d;
+  };
+  return profileStretchesBy(
+    own.map((e) => e.station),
+    (i) => surveyedStretchType(info, own[i]!, own[i + 1]!, near[i]!, near[i + 1]!, intervals[i]!, band, (k) => distance(k === 0 ? i : i + 1, intervals[i]!)),
+  );
+}
+
+/**
+ * The profile type of the stretch between two entries of a surveyed reach, from the class of the interval j it lies
+ * in and the zone of its depths there: the mean depth against the mean of the ends' critical depths, and against
+ * normal depth on the interval's slope by the mean of the ends' estimated distances from it (surveyedClass.ts).
+ */
+function surveyedStretchType(
+  info: SurveyInfo,
+  a: Entry,
+  b: Entry,
+  ja: number,
+  jb: number,
+  j: number,
+  band: (depth: number) => number,
+  /** y − yn at end 0 (a) or 1 (b) on interval j's slope; null without a normal depth */
+  distance: (end: 0 | 1) => number | null,
+): ProfileType {
+  const mean = 0.5 * (a.depth + b.depth);
+  const yc = 0.5 * (info.critical(ja) + info.critical(jb));
+  const da = distance(0);
+  const db = distance(1);
+  const yn = da === null || db === null ? null : mean - 0.5 * (da + db);
+  const cls: ReachClass = { normalDepth: yn !== null && Number.isFinite(yn) ? yn : null, criticalDepth: yc, slopeClass: info.classes[j]! };
+  // a depth infinitely far from normal depth (conveyance not rising with depth): only its side matters
+  if (yn !== null && !Number.isFinite(yn)) return profileType({ ...cls, normalDepth: yn > 0 ? 0 : Number.MAX_VALUE }, mean, band(mean));
+  return profileType(cls, mean, band(mean));
+}
+
+/** A surveyed reach's parts of one slope class, upstream first. */
+function reachParts(info: SurveyInfo): ReachPart[] {
+  const nodes = info.nodes;
+  return info.parts.map((part) => ({
+    from: nodes[part.first]!.station,
+    to: nodes[part.last]!.station,
+    slopeClass: part.slopeClass,
+    slope: meanSlope(nodes, part.first, part.last),
+  }));
 }
 
 function regimeOf(depth: number, yc: number): Regime {

@@ -15,7 +15,7 @@
  * step may span several output stations, filled by cubic Hermite interpolation (dy/dx from the equation).
  */
 import { NumericalError } from '../core/errors.js';
-import { brentRoot } from '../core/roots.js';
+import { brentMinimum, brentRoot } from '../core/roots.js';
 import {
   criticalStartStepFraction,
   stopApproachFraction,
@@ -230,7 +230,17 @@ export function energyStep(
   }
   const critical = stateAt(spec, yc);
   const rc = residualOf(critical);
-  if (rc > 0) return limitStop(critical, 'critical');
+  if (rc > 0) {
+    // With an eddy loss the residual is not monotone on the branch: the loss C·|Δ(αV²/2g)| changes with the trial
+    // depth at a rate C·|d(αV²/2g)/dy| that outweighs |dE/dy| next to critical depth, so the residual turns back up
+    // towards critical depth, and a positive residual there need not mean that no depth balances the step (it was
+    // read so, and a step whose guessed bracket was just too narrow ran into critical depth: the profile then moved
+    // by jumps as the roughness changed). Away from critical depth the residual keeps the branch's sign of slope;
+    // its least value on the branch tells: below zero, the step's root lies between it and the branch's far end.
+    const dip = extraLoss ? branchDip(residual, spec, s1, yc, xTolerance) : undefined;
+    if (dip === undefined) return limitStop(critical, 'critical');
+    return solved(brentRoot(residual, dip.a, dip.b, { xTolerance, what: `standard step depth at station ${x2}` }));
+  }
   if (rc === 0) return { state: critical };
 
   let lo: number;
@@ -257,6 +267,34 @@ export function energyStep(
 
   const y = brentRoot(residual, lo, hi, { xTolerance, what: `standard step depth at station ${x2}` });
   return solved(y);
+}
+
+/**
+ * The part of the branch beyond the residual's least value, where the residual keeps the branch's sign of slope
+ * and changes sign once, or undefined where the residual stays above zero on the whole branch (the flow reaches
+ * critical depth within the step). Supercritical: the least value on (floor, yc], the root below it; subcritical:
+ * on [yc, far] with far the larger of twice the known depth and twice critical depth (inside the section), the
+ * root above it. The residual is falling (supercritical) or rising (subcritical) away from critical depth, so
+ * Brent's minimiser finds its one least value.
+ */
+function branchDip(
+  residual: (y: number) => number,
+  spec: StretchSpec,
+  known: PointState,
+  yc: number,
+  xTolerance: number,
+): { a: number; b: number } | undefined {
+  const what = 'standard step: the least energy residual on the branch';
+  if (spec.regime === 'supercritical') {
+    const lo = floorDepth(spec);
+    const y = brentMinimum(residual, lo, yc, { xTolerance, what });
+    if (!(residual(y) < 0)) return undefined;
+    return residual(lo) > 0 ? { a: lo, b: y } : undefined;
+  }
+  const far = Math.min(ceilingDepth(spec), 2 * Math.max(known.depth, yc));
+  const y = brentMinimum(residual, yc, far, { xTolerance, what });
+  if (!(residual(y) < 0)) return undefined;
+  return residual(far) > 0 ? { a: y, b: far } : undefined;
 }
 
 function hermite(t: number, y0: number, y1: number, m0: number, m1: number, h: number): number {

@@ -46,14 +46,33 @@ export interface ProfileStretch {
   to: number;
 }
 
+/**
+ * A part of a surveyed reach: consecutive intervals between surveyed sections with one slope class (each interval's
+ * own bed slope against the critical slope of its sections for the discharge). Added by the profile engine.
+ */
+export interface ReachPart {
+  from: number;
+  to: number;
+  slopeClass: SlopeClass;
+  /** the part's mean bed slope: bed fall over flow length */
+  slope: number;
+}
+
 export interface ReachResult {
   id: string;
   from: number;
   to: number;
+  /**
+   * A prismatic reach's class. A surveyed reach's is that of its longest part (see `parts`), with normal and
+   * critical depth at that part's upstream section on the part's mean slope.
+   */
   slopeClass: SlopeClass;
   normalDepth: number | null;
   criticalDepth: number;
+  /** each stretch's type from the zone of its depths where it lies (on a surveyed reach, with that place's class) */
   profiles: ProfileStretch[];
+  /** a surveyed reach's parts of one slope class, upstream first (absent on a prismatic reach) */
+  parts?: ReachPart[];
   /** the reach's own discharge where it differs from the flow's (a flow change); added by the profile engine */
   discharge?: number;
 }

@@ -70,7 +70,13 @@ export function mapFlowStations(map: StationMap, flow: FlowResult): FlowResult {
   const out: FlowResult = {
     ...flow,
     stations: flow.stations.map((s) => ({ ...s, station: at(s.station) })),
-    reaches: flow.reaches.map((r) => ({ ...r, from: at(r.from), to: at(r.to), profiles: r.profiles.map((p) => ({ ...p, from: at(p.from), to: at(p.to) })) })),
+    reaches: flow.reaches.map((r) => ({
+      ...r,
+      from: at(r.from),
+      to: at(r.to),
+      profiles: r.profiles.map((p) => ({ ...p, from: at(p.from), to: at(p.to) })),
+      ...(r.parts ? { parts: r.parts.map((p) => ({ ...p, from: at(p.from), to: at(p.to) })) } : {}),
+    })),
     jumps: flow.jumps.map((j) => ({ ...j, station: at(j.station) })),
     warnings: flow.warnings.map(text),
   };

@@ -72,6 +72,48 @@ describe('energyStep', () => {
   });
 });
 
+describe('energyStep with an eddy loss (the surveyed step: Chow 1959 §10-4, published method; coefficients 0.1 and 0.3 common practice)', () => {
+  // he = 0.1·rise or 0.3·fall of the velocity head downstream (eddyLoss of src/profile/surveyed.ts, pinned in
+  // tests/profile/surveyed.test.ts); the energy equation with it, solved here independently of the engine
+  const loss = (known: ReturnType<typeof pointState>, trial: ReturnType<typeof pointState>) => {
+    const dh = trial.velocityHead - known.velocityHead;
+    return dh > 0 ? 0.1 * dh : 0.3 * -dh;
+  };
+  const balance = (s: StretchSpec, y1: number, dx: number, y2: number) => {
+    const a = pointState(rect5, y1, q);
+    const b = pointState(rect5, y2, q);
+    return b.energy - a.energy - s.slope * dx + meanFrictionSlope(s.averaging, a, b, q) * dx + loss(a, b);
+  };
+
+  it('energyStep: a supercritical step near critical depth whose residual is positive at critical depth still finds the depth that balances it (regression)', () => {
+    // an S2 drawdown on an invented steep slope (S0 = 0.005: yn = 1.04 m, yc = 1.18 m), one metre from a depth 5 % below
+    // critical: the expansion loss a trial
+    // depth nearer critical would carry (0.3 of the fall in velocity head) turns the residual up towards critical depth,
+    // which was read as "no depth balances the step" and ended the profile at critical depth
+    const s = spec(0.005, 'supercritical', 0.95 * yc);
+    const y1 = 0.95 * yc;
+    expect(s.normalDepth!).toBeLessThan(y1);
+    expect(balance(s, y1, 1, yc), 'the residual at critical depth (the case of the regression)').toBeGreaterThan(0);
+    const outcome = energyStep(s, 0, pointState(rect5, y1, q), 1, undefined, loss);
+    expect(outcome.stop).toBeUndefined();
+    const y2 = outcome.state!.depth;
+    // an S2 profile falls downstream (Chow 1959 §9-2, fig. 9-1): the depth found lies below the known one
+    expect(y2).toBeLessThan(y1);
+    expect(Math.abs(balance(s, y1, 1, y2))).toBeLessThan(1e-9);
+    // the same depth with a guess (the bracket around it) and without (the whole-branch search)
+    const guessed = energyStep(s, 0, pointState(rect5, y1, q), 1, y1 - 0.01, loss);
+    assertInDelta(guessed.state!.depth, y2, 2 * energyStepDepthFraction * accuracyFor('SI', yc), 'with a guess');
+  });
+
+  it('energyStep: with the eddy loss and no balancing depth on the branch, the step still stops at critical depth', () => {
+    // the same slope from a depth just below critical with a long step uphill in energy: a mild slope (S0 < Sf) and a
+    // supercritical flow that reaches critical depth within 50 m (an M3, Chow 1959 §9-2)
+    const s = spec(0.0005, 'supercritical', 0.9 * yc);
+    const outcome = energyStep(s, 0, pointState(rect5, 0.9 * yc, q), 50, undefined, loss);
+    expect(outcome.stop?.reason).toBe('critical');
+  });
+});
+
 describe('meanFrictionSlope (the four means of Chow 1959 §10-3; common practice)', () => {
   it('meanFrictionSlope: average conveyance, arithmetic, geometric and harmonic means of Sf', () => {
     const a = pointState(rect5, 2, q);
