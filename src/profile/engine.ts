@@ -41,7 +41,7 @@ import { integrators, referenceIntegrator } from './methods.js';
 import type { FlowRegime, ProfileIntegrator, StretchProfile, StretchSpec } from './stretch.js';
 import type { ControlResponse, InternalControl, ProfileInput, ReachInput, SurveyNode } from './types.js';
 import { flowLength, surveyedStretch } from './surveyed.js';
-import { aboveNormal, controlBreaks, intervalClasses, intervalSlope, surveyParts, type SurveyPart } from './surveyedClass.js';
+import { type ConveyanceGrowth, controlBreaks, conveyanceGrowth, distanceFromNormal, intervalClasses, intervalSlope, surveyParts, type SurveyPart } from './surveyedClass.js';
 import { normalDepth as normalDepthOf } from '../hydraulics/normalDepth.js';
 import { criticalDepth as criticalDepthOf } from '../hydraulics/criticalDepth.js';
 
@@ -1027,23 +1027,21 @@ export function computeProfile(input: ProfileInput, options: EngineOptions = {})
 
 /**
  * The stretches of a surveyed reach's profile (its entries in order): each takes the type from the class of the
- * interval it lies in and the zone of its depths there. An entry's distance from normal depth is estimated once
- * for the slope of the interval downstream of it and once for the one upstream (where they differ), not per stretch.
+ * interval it lies in and the zone of its depths there. An entry's K and d(ln K)/dy are worked out once; its distance
+ * from normal depth on the slope of each interval beside it follows from them.
  */
 function surveyedStretches(info: SurveyInfo, own: readonly Entry[], discharge: number, band: (depth: number) => number): ProfileStretch[] {
   const nodes = info.nodes;
   const intervals = own.map((e, i) => (i + 1 < own.length ? intervalOf(nodes, 0.5 * (e.station + own[i + 1]!.station)) : -1));
   const near = own.map((e) => nearestNode(nodes, e.station));
-  // per entry, the estimate for the interval last asked (stretches in order ask each entry for at most two intervals)
-  const askedFor = new Int32Array(own.length).fill(-1);
-  const estimate = new Float64Array(own.length);
+  // per entry, K and d(ln K)/dy at its depth, worked out once (the distance from normal depth on each interval's
+  // slope then costs two logarithms)
+  const growth = new Array<ConveyanceGrowth | undefined>(own.length);
   const distance = (i: number, j: number): number | null => {
-    if (askedFor[i] === j) return estimate[i]!;
-    const d = aboveNormal(nodes[near[i]!]!.section, own[i]!.depth, discharge, intervalSlope(nodes, j));
-    if (d === null) return null;
-    askedFor[i] = j;
-    estimate[i] = d;
-    return d;
+    const slope = intervalSlope(nodes, j);
+    if (!(slope > 0)) return null;
+    const g = (growth[i] ??= conveyanceGrowth(nodes[near[i]!]!.section, own[i]!.depth, discharge));
+    return distanceFromNormal(g, discharge, slope);
   };
   return profileStretchesBy(
     own.map((e) => e.station),
@@ -1074,7 +1072,8 @@ function surveyedStretchType(
   const yn = da === null || db === null ? null : mean - 0.5 * (da + db);
   const cls: ReachClass = { normalDepth: yn !== null && Number.isFinite(yn) ? yn : null, criticalDepth: yc, slopeClass: info.classes[j]! };
   // a depth infinitely far from normal depth (conveyance not rising with depth): only its side matters
-  if (yn !== null && !Number.isFinite(yn)) return profileType({ ...cls, normalDepth: yn > 0 ? 0 : Number.MAX_VALUE }, mean, band(mean));
+  // (yn = +∞: the depth lies far below normal depth, so normal depth is taken as the largest number; −∞: far above, 0)
+  if (yn !== null && !Number.isFinite(yn)) return profileType({ ...cls, normalDepth: yn > 0 ? Number.MAX_VALUE : 0 }, mean, band(mean));
   return profileType(cls, mean, band(mean));
 }
 

@@ -79,27 +79,40 @@ export function controlBreaks(classes: readonly SlopeClass[]): number[] {
 
 const slopes = new Float64Array(6);
 
+/** K and d(ln K)/dy at a depth: what the distance from normal depth needs, whatever the bed slope. */
+export interface ConveyanceGrowth {
+  readonly conveyance: number;
+  readonly logSlope: number;
+}
+
+/** K and d(ln K)/dy at a depth: from the subsections' perimeter rates where the section reports them, else by a central difference. */
+export function conveyanceGrowth(hs: HydraulicSection, depth: number, discharge: number): ConveyanceGrowth {
+  if (conveyanceSlopesInto(hs, depth, slopes)) {
+    // K and dK/dy from the subsections' perimeter rates, in one evaluation
+    const k = slopes[SlopeSlot.conveyance]!;
+    return { conveyance: k, logSlope: slopes[SlopeSlot.conveyanceSlope]! / k };
+  }
+  // a central difference of ln K, kept inside the section (one-sided at its top)
+  const k = conveyance(hs, depth, discharge);
+  const h = normalEstimateStep * depth;
+  const up = Math.min(depth + h, hs.section.maxDepth);
+  const down = depth - h;
+  return { conveyance: k, logSlope: Math.log(conveyance(hs, up, discharge) / conveyance(hs, down, discharge)) / (up - down) };
+}
+
+/** y − yn on bed slope S0 from K and d(ln K)/dy at y (the Newton estimate of the module comment); null where S0 ≤ 0. */
+export function distanceFromNormal(growth: ConveyanceGrowth, discharge: number, slope: number): number | null {
+  if (!(slope > 0)) return null;
+  const logRatio = 2 * Math.log(discharge / growth.conveyance) - Math.log(slope);
+  if (!(growth.logSlope > 0)) return logRatio < 0 ? Infinity : logRatio > 0 ? -Infinity : 0;
+  return logRatio / (-2 * growth.logSlope);
+}
+
 /**
  * y − yn at depth y in a section on bed slope S0 > 0, by the Newton estimate of the module comment (exact in sign);
  * null where S0 ≤ 0 (no normal depth).
  */
 export function aboveNormal(hs: HydraulicSection, depth: number, discharge: number, slope: number): number | null {
   if (!(slope > 0)) return null;
-  let k: number;
-  let logSlope: number;
-  if (conveyanceSlopesInto(hs, depth, slopes)) {
-    // K and dK/dy from the subsections' perimeter rates, in one evaluation
-    k = slopes[SlopeSlot.conveyance]!;
-    logSlope = slopes[SlopeSlot.conveyanceSlope]! / k;
-  } else {
-    // a central difference of ln K, kept inside the section (one-sided at its top)
-    k = conveyance(hs, depth, discharge);
-    const h = normalEstimateStep * depth;
-    const up = Math.min(depth + h, hs.section.maxDepth);
-    const down = depth - h;
-    logSlope = Math.log(conveyance(hs, up, discharge) / conveyance(hs, down, discharge)) / (up - down);
-  }
-  const logRatio = 2 * Math.log(discharge / k) - Math.log(slope);
-  if (!(logSlope > 0)) return logRatio < 0 ? Infinity : logRatio > 0 ? -Infinity : 0;
-  return logRatio / (-2 * logSlope);
+  return distanceFromNormal(conveyanceGrowth(hs, depth, discharge), discharge, slope);
 }
