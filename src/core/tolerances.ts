@@ -88,6 +88,8 @@ export const odeRelativeTolerance = 1e-8;
 export const odeReferenceRelativeTolerance = 1e-11;
 /** Profile: relative step for the numerical derivative dα/dy of a compound section. */
 export const alphaDerivativeStep = 1e-6;
+/** Profile: a free jump whose two depths' specific forces differ by more than this fraction is reported as not balancing. */
+export const jumpBalanceFraction = 1e-5;
 /** Profile: a jump toe is located to this fraction of the channel length (Brent on the specific-force difference). */
 export const jumpToeTolerance = 1e-9;
 /** Profile: the jump toe is searched on each side's profile integrated once through this many equal parts of the

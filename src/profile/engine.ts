@@ -15,7 +15,7 @@
  *   5. assemble   stations with their elements, profile types by zone, jumps, controls, warnings
  */
 import { InputError, NumericalError, type Problem } from '../core/errors.js';
-import { accuracyFor, jumpToeSubdivisions, jumpToeTolerance, nearCriticalBand } from '../core/tolerances.js';
+import { accuracyFor, jumpBalanceFraction, jumpToeSubdivisions, jumpToeTolerance, nearCriticalBand } from '../core/tolerances.js';
 import { flowState } from '../hydraulics/state.js';
 import { requireDepth } from '../hydraulics/depthSearch.js';
 import type { HydraulicSection } from '../hydraulics/hydraulicSection.js';
@@ -902,7 +902,27 @@ export function computeProfile(input: ProfileInput, options: EngineOptions = {})
     }
     // the toe lies in (stations[i0−1], stations[i0]]
     const { toe, y1, y2, hs } = found!;
-    jumps.push(found!.held ? { ...jumpAt(hs, hs, q, toe, y1, y2), atControl: true } : jumpAt(hs, hs, q, toe, y1, y2));
+    if (found!.held) jumps.push({ ...jumpAt(hs, hs, q, toe, y1, y2), atControl: true });
+    else {
+      const jump = jumpAt(hs, hs, q, toe, y1, y2);
+      // a toe found where the supercritical profile ends at critical depth need not balance: in a section whose α
+      // varies with depth the least specific force lies below critical depth, and the two curves can cross there
+      // without a momentum balance (the depths' forces differ, or energy would be gained). Said, not hidden: the jump
+      // is marked as held (no free balance) and a warning gives the mismatch.
+      const m1 = force(hs, y1, q);
+      const m2 = force(hs, y2, q);
+      // (on a prismatic piece, where the toe is located on the force difference itself; a surveyed toe lies between
+      // two sections, its depths interpolated between them, and balances only to that interpolation)
+      if (!piece.nodes && (Math.abs(m1 - m2) > jumpBalanceFraction * Math.max(m1, m2) || jump.energyLoss < 0)) {
+        jumps.push({ ...jump, atControl: true });
+        warnings.push(
+          `The jump at station ${show(toe)} joins the supercritical depth ${show(y1)} to the subcritical depth ${show(y2)}, ` +
+            `but the two do not balance: their specific forces differ by ${((100 * Math.abs(m1 - m2)) / Math.max(m1, m2)).toPrecision(2)} % and the energy would ` +
+            `${jump.energyLoss < 0 ? `rise by ${show(-jump.energyLoss)}` : `fall by ${show(jump.energyLoss)}`} (possible where α varies with depth, as in a compound section): ` +
+            'the jump lies about there, but its place and depths are uncertain; a check of the section\'s roughness subdivision is advised.',
+        );
+      } else jumps.push(jump);
+    }
     for (let i = 0; i < i0; i++) final[p]!.push({ station: stations[i]!, depth: sup[i]!, piece: p });
     final[p]!.push({ station: toe, depth: y1, piece: p }, { station: toe, depth: y2, piece: p });
     for (let i = i0; i < stations.length; i++) {

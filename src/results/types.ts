@@ -92,7 +92,8 @@ export interface JumpResult {
   energyLoss: number;
   /** the correlation `length` comes from (added by the profile engine; optional for older readers) */
   lengthMethod?: string;
-  /** true when the toe lies at a control or channel end (jump drowned up to it, or held there) */
+  /** true when the toe lies at a control or channel end (jump drowned up to it, or held there), or where its two depths
+   *  cannot balance in specific force (a warning says by how much): no free momentum balance holds there */
   atControl?: boolean;
 }
 

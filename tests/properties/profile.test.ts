@@ -17,6 +17,9 @@ import { GvfError } from '../../src/core/errors.js';
 import { accuracyFor } from '../../src/core/tolerances.js';
 import { specificForce } from '../../src/hydraulics/specificForce.js';
 import { computeProfile } from '../../src/profile/engine.js';
+import { points } from '../../src/geometry/shapes/points.js';
+import { hydraulicSection } from '../../src/hydraulics/hydraulicSection.js';
+import { SI } from '../../src/core/units.js';
 import type { PrismaticReachInput } from '../../src/profile/types.js';
 import type { FlowResult, ProfileType, ReachResult } from '../../src/results/types.js';
 import { type ChannelCase, channels, nonFinite, settings } from './support.js';
@@ -120,6 +123,32 @@ function check(c: ChannelCase): void {
 describe('computeProfile on random channels', () => {
   it('computeProfile(standard-step) gives finite results, depths inside the section, types by zone and balanced jumps', () => {
     fc.assert(fc.property(channels(['standard-step']), check), settings(500));
+  });
+
+  it('computeProfile: a jump whose depths cannot balance (α varying in a compound section) is marked held and warned of, never reported as free', () => {
+    // found by the long property run (seed 1952670795): an S2 into an H3 that reaches critical depth, with a narrow
+    // smooth main channel (n = 0.01) between rough floodplains; the H2 from a free overfall downstream meets it there.
+    // The toe sat where the H3 ends at critical depth, with specific forces 125.215 and 125.207 (7e-5 apart) and an
+    // energy gain of 0.27 m: reported as a free jump. The property here is the one above: a free jump balances.
+    const pts: [number, number][] = [[0,8.388257596239725],[0,4.6779291002476775],[4.989165843189047,4.635650341359432],[9.978331686378095,4.593371582471186],[14.967497529567144,4.551092823582941],[19.95666337275619,4.508814064694696],[24.945829215945235,4.46653530580645],[29.934995059134287,4.424256546918205],[34.92416090232333,4.381977788029959],[39.91332674551238,4.3396990291417135],[44.90249258870142,4.297420270253468],[49.89165843189047,4.255141511365222],[54.88082427507952,4.212862752476977],[59.869990118268575,4.170583993588732],[64.85915596145762,4.128305234700486],[69.84832180464666,4.086026475812241],[74.8374876478357,4.0437477169239955],[79.82665349102476,4.001468958035749],[84.81581933421381,4e-323],[89.80498517740284,5e-323],[94.7941510205919,4.001468958035749],[99.78331686378094,4.0437477169239955],[104.77248270697,4.086026475812241],[109.76164855015904,4.128305234700486],[114.75081439334808,4.170583993588732],[119.73998023653715,4.212862752476977],[124.72914607972619,4.255141511365223],[129.71831192291523,4.297420270253468],[134.70747776610426,4.3396990291417135],[139.69664360929332,4.381977788029959],[144.68580945248237,4.424256546918205],[149.6749752956714,4.46653530580645],[154.6641411388605,4.508814064694696],[159.65330698204951,4.551092823582941],[164.64247282523854,4.593371582471186],[169.63163866842763,4.635650341359432],[174.62080451161665,4.6779291002476775],[174.62080451161665,8.388257596239725]];
+    const zones: [number, number][] = [[0, 0.02995156781408624], [79.99999999999977, 0.010000000000000009], [94.62080451161688, 0.023961254251268993]];
+    const hs = hydraulicSection(points({ points: pts, roughness: zones }), 'manning', SI);
+    const input = {
+      units: SI,
+      reaches: [
+        { id: 'reach 1', section: hs, length: 1214.6930525374453, slope: 0.0022323460992224506 },
+        { id: 'reach 2', section: hs, length: 801.0637511595385, slope: 0 },
+      ],
+      discharge: 157.0609912711387,
+      flowId: 'regression',
+      boundaries: { upstream: { type: 'critical' }, downstream: { type: 'critical' } },
+      method: 'standard-step',
+    } as const;
+    const result = computeProfile(input);
+    expect(problemsOf({ input, label: 'regression' }, result)).toEqual([]);
+    for (const jump of result.jumps.filter((j) => j.atControl)) {
+      expect(result.warnings.some((w) => w.includes('do not balance'))).toBe(true);
+    }
   });
 
   it('computeProfile(direct-step, ode) gives finite results, depths inside the section, types by zone and balanced jumps', () => {
