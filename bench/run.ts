@@ -65,8 +65,11 @@ async function surveyed(figures: Figure[]): Promise<void> {
   const built = performance.now() - started;
   // fresh sections before every sample: the per-section energy tables (kept after a section's first use) are
   // built inside the timing, as in a real run of a new survey
+  // and the garbage of the sample before collected first (npm run bench starts node with --expose-gc), so that a
+  // sample does not pay for its predecessor's: a run of a new survey in its own process starts clean
   const fresh = () => {
     survey = buildSurvey();
+    (globalThis as { gc?: () => void }).gc?.();
   };
   const value = await median(name, () => runSurveyedEngine(survey), { time: 0, iterations: 5, warmups: 1, beforeEach: fresh });
   figures.push({

@@ -20,6 +20,7 @@
  */
 import { HydraulicError, NumericalError } from '../core/errors.js';
 import { brentRoot, expandUpward } from '../core/roots.js';
+import { indexedExtrema } from './extremaIndex.js';
 import type { Section } from '../geometry/section.js';
 import { conveyanceAndAlpha, conveyanceSlopesInto, type HydraulicSection, SlopeSlot } from './hydraulicSection.js';
 import {
@@ -150,6 +151,52 @@ export function criticalDepths(hs: HydraulicSection, discharge: number): number[
   return [...specificEnergyExtrema(hs, discharge).minima];
 }
 
+/** The sampled minima of the last singleMinimum call (sample indices), and how many. */
+let sampledMinima = new Int32Array(8);
+let sampledCount = 0;
+const collectMinimum = (sample: number, minimum: boolean): void => {
+  if (!minimum) return;
+  if (sampledCount === sampledMinima.length) {
+    const grown = new Int32Array(2 * sampledMinima.length);
+    grown.set(sampledMinima);
+    sampledMinima = grown;
+  }
+  sampledMinima[sampledCount++] = sample;
+};
+
+/**
+ * The usual case of an irregular or compound section, without the general search's bookkeeping: its kept energy
+ * curve has an index, specific energy has one sampled minimum and rises at the top, and dE/dy changes sign in a sample
+ * interval beside it; that minimum, as the root of dE/dy there (Brent), the same depth specificEnergyExtrema gives.
+ * Undefined otherwise (the general search then runs: several minima to compare, a curve falling at the top, a
+ * minimum at a jump of E, a range that depends on the discharge).
+ */
+function singleMinimum(hs: HydraulicSection, discharge: number): number | undefined {
+  const section = hs.section;
+  if (hasSingleCriticalDepth(section) || !Number.isFinite(section.maxDepth)) return undefined;
+  const curve = energyCurve(hs, section.maxDepth, discharge);
+  if (curve.index === undefined) return undefined;
+  const q2 = discharge * discharge;
+  sampledCount = 0;
+  if (indexedExtrema(curve.index, q2, collectMinimum) || sampledCount !== 1) return undefined;
+  const i = sampledMinima[0]!;
+  const w = curve.slopeWeight;
+  const below = 1 + q2 * w[i - 1]!;
+  const middle = 1 + q2 * w[i]!;
+  const above = 1 + q2 * w[i + 1]!;
+  const j = below < 0 && middle >= 0 ? i - 1 : middle < 0 && above >= 0 ? i : -1;
+  if (j < 0) return undefined;
+  const a = curve.depth[j]!;
+  const b = curve.depth[j + 1]!;
+  const fa = 1 + q2 * w[j]!;
+  const fb = 1 + q2 * w[j + 1]!;
+  if (fb === 0) return b;
+  return brentRoot((y) => (y === a ? fa : y === b ? fb : energySlopeAt(hs, y, discharge)), a, b, {
+    xTolerance: depthTolerance(section, a),
+    what: 'critical depth',
+  });
+}
+
 /**
  * The critical depth of least specific energy. In an irregular section whose specific energy is still
  * falling at its end points (a further minimum lies above them) and is there below every minimum inside,
@@ -157,6 +204,8 @@ export function criticalDepths(hs: HydraulicSection, discharge: number): number[
  */
 export function criticalDepth(hs: HydraulicSection, discharge: number): number {
   requireDischarge(discharge, 'critical depth');
+  const single = singleMinimum(hs, discharge);
+  if (single !== undefined) return single;
   const extrema = specificEnergyExtrema(hs, discharge);
   const depths = extrema.minima;
   let best = depths[0]!;

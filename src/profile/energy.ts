@@ -30,6 +30,8 @@ export interface PointState {
   readonly force: number;
   /** dE/dy: positive on the subcritical branch, negative on the supercritical branch, 0 at critical depth */
   readonly dEdy: number;
+  /** dK/dy from the subsections' perimeter rates; NaN where the section has no analytic form for it */
+  readonly conveyanceSlope: number;
 }
 
 /** True when α varies with depth in this section (compound section, α from subsections). */
@@ -48,6 +50,9 @@ function alphaAt(hs: HydraulicSection, y: number, discharge: number): number {
  */
 class State implements PointState {
   #dEdy = NaN;
+  /** dK/dy, NaN until worked out (with dα/dy, in one evaluation where the section reports perimeter rates) */
+  #conveyanceSlope = NaN;
+  #slopesTried = false;
   constructor(
     private readonly hs: HydraulicSection,
     private readonly discharge: number,
@@ -62,18 +67,31 @@ class State implements PointState {
     readonly force: number,
   ) {}
   get dEdy(): number {
-    if (Number.isNaN(this.#dEdy)) this.#dEdy = energySlope(this.hs, this.depth, this.discharge, this.area, this.topWidth, this.alpha);
+    if (Number.isNaN(this.#dEdy)) {
+      const g = this.hs.units.g;
+      const q2 = this.discharge * this.discharge;
+      const a = this.area;
+      let dEdy = 1 - (this.alpha * q2 * this.topWidth) / (g * a * a * a);
+      if (alphaVaries(this.hs)) {
+        // dα/dy from the perimeter rates (dK/dy comes with it), else by differencing
+        const alphaSlope = this.#slopes() ? slopeScratch[SlopeSlot.alphaSlope]! : alphaSlopeAt(this.hs, this.depth, this.discharge);
+        dEdy += (q2 / (2 * g * a * a)) * alphaSlope;
+      }
+      this.#dEdy = dEdy;
+    }
     return this.#dEdy;
   }
-}
-
-/** dE/dy = 1 − αQ²T/(gA³) + (Q²/2gA²)·dα/dy at depth y (see the module comment). */
-function energySlope(hs: HydraulicSection, y: number, discharge: number, a: number, topWidth: number, alpha: number): number {
-  const g = hs.units.g;
-  const q2 = discharge * discharge;
-  let dEdy = 1 - (alpha * q2 * topWidth) / (g * a * a * a);
-  if (alphaVaries(hs)) dEdy += (q2 / (2 * g * a * a)) * alphaSlopeAt(hs, y, discharge);
-  return dEdy;
+  get conveyanceSlope(): number {
+    if (!this.#slopesTried) this.#slopes();
+    return this.#conveyanceSlope;
+  }
+  /** the analytic slopes at this depth into slopeScratch, keeping dK/dy; false where there are none */
+  #slopes(): boolean {
+    this.#slopesTried = true;
+    if (!conveyanceSlopesInto(this.hs, this.depth, slopeScratch)) return false;
+    this.#conveyanceSlope = slopeScratch[SlopeSlot.conveyanceSlope]!;
+    return true;
+  }
 }
 
 /**

@@ -1018,7 +1018,7 @@ export function computeProfile(input: ProfileInput, options: EngineOptions = {})
       criticalDepth: cls.criticalDepth,
       ...(reach.discharge !== undefined ? { discharge: reach.discharge } : {}),
       profiles: info
-        ? surveyedStretches(info, own, reach.discharge ?? q, band)
+        ? surveyedStretches(info, own, reach.discharge ?? q, band, (e, node) => rememberedState(ctx, pieces[e.piece]!, node, e.depth))
         : profileStretches(cls, stationsOwn, own.map((e) => e.depth), band),
       ...(info ? { parts: reachParts(info) } : {}),
     };
@@ -1050,17 +1050,30 @@ export function computeProfile(input: ProfileInput, options: EngineOptions = {})
  * interval it lies in and the zone of its depths there. An entry's K and d(ln K)/dy are worked out once; its distance
  * from normal depth on the slope of each interval beside it follows from them.
  */
-function surveyedStretches(info: SurveyInfo, own: readonly Entry[], discharge: number, band: (depth: number) => number): ProfileStretch[] {
+function surveyedStretches(
+  info: SurveyInfo,
+  own: readonly Entry[],
+  discharge: number,
+  band: (depth: number) => number,
+  /** the state a step balanced at an entry's node and depth, if any (its K and dK/dy are then known) */
+  stateOf: (entry: Entry, node: number) => PointState | undefined,
+): ProfileStretch[] {
   const nodes = info.nodes;
   const intervals = own.map((e, i) => (i + 1 < own.length ? intervalOf(nodes, 0.5 * (e.station + own[i + 1]!.station)) : -1));
   const near = own.map((e) => nearestNode(nodes, e.station));
   // per entry, K and d(ln K)/dy at its depth, worked out once (the distance from normal depth on each interval's
   // slope then costs two logarithms)
   const growth = new Array<ConveyanceGrowth | undefined>(own.length);
+  const growthAt = (i: number): ConveyanceGrowth => {
+    const state = stateOf(own[i]!, near[i]!);
+    const slope = state?.conveyanceSlope ?? NaN;
+    if (state !== undefined && Number.isFinite(slope) && state.conveyance > 0) return { conveyance: state.conveyance, logSlope: slope / state.conveyance };
+    return conveyanceGrowth(nodes[near[i]!]!.section, own[i]!.depth, discharge);
+  };
   const distance = (i: number, j: number): number | null => {
     const slope = intervalSlope(nodes, j);
     if (!(slope > 0)) return null;
-    const g = (growth[i] ??= conveyanceGrowth(nodes[near[i]!]!.section, own[i]!.depth, discharge));
+    const g = (growth[i] ??= growthAt(i));
     return distanceFromNormal(g, discharge, slope);
   };
   return profileStretchesBy(

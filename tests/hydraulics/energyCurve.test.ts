@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { energyCurveSamples } from '../../src/core/tolerances.js';
-import { criticalDepths, energyAt } from '../../src/hydraulics/criticalDepth.js';
+import { criticalDepth, criticalDepths, energyAt } from '../../src/hydraulics/criticalDepth.js';
 import { curveDepths } from '../../src/hydraulics/energyCurve.js';
 import { compound } from './sections.js';
 
@@ -31,6 +31,17 @@ describe('energyCurve', () => {
       const found = criticalDepths(hs, q);
       expect(found.length, `Q = ${q}: ${found} against ${brute}`).toBe(brute.length);
       found.forEach((y, k) => expect(Math.abs(y - brute[k]!)).toBeLessThanOrEqual((2 * top) / n));
+    }
+  });
+
+  it('criticalDepth(compound) gives the least-energy minimum of criticalDepths exactly (its one-minimum shortcut included)', () => {
+    // the shortcut for one sampled minimum must give the general search's depth; the least energy is compared here
+    // directly with E at each minimum (the definition of the critical depth of least energy, Blalock & Sturm 1981)
+    const hs = compound();
+    for (const q of [1, 5, 20, 60, 150, 400, 900]) {
+      const all = criticalDepths(hs, q);
+      const least = all.reduce((best, y) => (energyAt(hs, y, q) < energyAt(hs, best, q) ? y : best));
+      expect(criticalDepth(hs, q), `Q = ${q}`).toBe(least);
     }
   });
 });
