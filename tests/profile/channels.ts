@@ -3,6 +3,7 @@ import { SI, US, type Units } from '../../src/core/units.js';
 import { rectangular } from '../../src/geometry/shapes/rectangular.js';
 import { trapezoidal } from '../../src/geometry/shapes/trapezoidal.js';
 import type { Section } from '../../src/geometry/section.js';
+import type { FrictionLaw } from '../../src/hydraulics/friction.js';
 import { hydraulicSection, type HydraulicSection } from '../../src/hydraulics/hydraulicSection.js';
 import type { Boundary, ProfileInput, ProfileMethod, ReachInput } from '../../src/profile/types.js';
 
@@ -20,9 +21,9 @@ export const chowTrapezoid: HydraulicSection = hydraulicSection(
 
 /**
  * The wide-channel idealisation (Chow 1959 §10-5, Bresse): per unit width, no side walls, so R = y exactly.
- * Implemented here as a Section with wetted perimeter equal to the width.
+ * Implemented here as a Section with wetted perimeter equal to the width; Chézy's C by default, or Manning's n.
  */
-export function wideChannel(width: number, chezyC: number, units: Units = SI): HydraulicSection {
+export function wideChannel(width: number, roughness: number, units: Units = SI, law: FrictionLaw = 'chezy'): HydraulicSection {
   const section: Section = {
     shape: 'rectangular',
     closed: false,
@@ -30,10 +31,10 @@ export function wideChannel(width: number, chezyC: number, units: Units = SI): H
     lengthScale: width,
     compound: false,
     elements: (y) => ({ area: width * y, wettedPerimeter: width, topWidth: width, firstMoment: (width * y * y) / 2 }),
-    subsections: (y) => [{ area: width * y, wettedPerimeter: width, topWidth: width, roughness: chezyC }],
+    subsections: (y) => [{ area: width * y, wettedPerimeter: width, topWidth: width, roughness }],
     describe: () => ({ shape: 'wide', width }),
   };
-  return hydraulicSection(section, 'chezy', units);
+  return hydraulicSection(section, law, units);
 }
 
 export function channel(

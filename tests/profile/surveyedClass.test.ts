@@ -11,7 +11,6 @@
  */
 import { describe, expect, it } from 'vitest';
 import { SI } from '../../src/core/units.js';
-import type { Section } from '../../src/geometry/section.js';
 import { points } from '../../src/geometry/shapes/points.js';
 import { hydraulicSection, type HydraulicSection } from '../../src/hydraulics/hydraulicSection.js';
 import { normalDepth } from '../../src/hydraulics/normalDepth.js';
@@ -20,21 +19,10 @@ import { aboveNormal, controlBreaks, criticalSlopeOf, intervalClasses, slopeClas
 import { computeProfile } from '../../src/profile/engine.js';
 import type { SurveyNode } from '../../src/profile/types.js';
 import { assertInDelta, assertRelative } from '../helpers/assert.js';
+import { wideChannel } from './channels.js';
 
 /** A wide channel with Manning friction: wetted perimeter equal to the width, so R = y exactly. */
-function wideManning(width: number, n: number): HydraulicSection {
-  const section: Section = {
-    shape: 'rectangular',
-    closed: false,
-    maxDepth: Infinity,
-    lengthScale: width,
-    compound: false,
-    elements: (y) => ({ area: width * y, wettedPerimeter: width, topWidth: width, firstMoment: (width * y * y) / 2 }),
-    subsections: (y) => [{ area: width * y, wettedPerimeter: width, topWidth: width, roughness: n }],
-    describe: () => ({ shape: 'wide', width }),
-  };
-  return hydraulicSection(section, 'manning', SI);
-}
+const wideManning = (width: number, roughness: number): HydraulicSection => wideChannel(width, roughness, SI, 'manning');
 
 const n = 0.03;
 const q = 1.5; // m²/s on a 1 m strip
