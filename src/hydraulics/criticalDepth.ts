@@ -151,7 +151,7 @@ export function criticalDepths(hs: HydraulicSection, discharge: number): number[
   return [...specificEnergyExtrema(hs, discharge).minima];
 }
 
-/** The sampled minima of the last singleMinimum call (sample indices), and how many. */
+/** The sampled minima of the last indexedCriticalDepth call (sample indices), and how many. */
 let sampledMinima = new Int32Array(8);
 let sampledCount = 0;
 const collectMinimum = (sample: number, minimum: boolean): void => {
@@ -166,35 +166,49 @@ const collectMinimum = (sample: number, minimum: boolean): void => {
 
 /**
  * The usual case of an irregular or compound section, without the general search's bookkeeping: its kept energy
- * curve has an index, specific energy has one sampled minimum and rises at the top, and dE/dy changes sign in a sample
- * interval beside it; that minimum, as the root of dE/dy there (Brent), the same depth specificEnergyExtrema gives.
- * Undefined otherwise (the general search then runs: several minima to compare, a curve falling at the top, a
- * minimum at a jump of E, a range that depends on the discharge).
+ * curve has an index, specific energy rises at the top, and at each sampled minimum dE/dy changes sign in a sample
+ * interval beside it; each minimum is then the root of dE/dy there (Brent), the depths specificEnergyExtrema gives,
+ * and the one of least energy is returned. Undefined otherwise (the general search then runs: a curve falling at the
+ * top, a minimum at a jump of E, a range that depends on the discharge).
  */
-function singleMinimum(hs: HydraulicSection, discharge: number): number | undefined {
+function indexedCriticalDepth(hs: HydraulicSection, discharge: number): number | undefined {
   const section = hs.section;
   if (hasSingleCriticalDepth(section) || !Number.isFinite(section.maxDepth)) return undefined;
   const curve = energyCurve(hs, section.maxDepth, discharge);
   if (curve.index === undefined) return undefined;
   const q2 = discharge * discharge;
   sampledCount = 0;
-  if (indexedExtrema(curve.index, q2, collectMinimum) || sampledCount !== 1) return undefined;
-  const i = sampledMinima[0]!;
+  if (indexedExtrema(curve.index, q2, collectMinimum) || sampledCount === 0) return undefined;
   const w = curve.slopeWeight;
-  const below = 1 + q2 * w[i - 1]!;
-  const middle = 1 + q2 * w[i]!;
-  const above = 1 + q2 * w[i + 1]!;
-  const j = below < 0 && middle >= 0 ? i - 1 : middle < 0 && above >= 0 ? i : -1;
-  if (j < 0) return undefined;
-  const a = curve.depth[j]!;
-  const b = curve.depth[j + 1]!;
-  const fa = 1 + q2 * w[j]!;
-  const fb = 1 + q2 * w[j + 1]!;
-  if (fb === 0) return b;
-  return brentRoot((y) => (y === a ? fa : y === b ? fb : energySlopeAt(hs, y, discharge)), a, b, {
-    xTolerance: depthTolerance(section, a),
-    what: 'critical depth',
-  });
+  const depth = curve.depth;
+  const f = (y: number) => energySlopeAt(hs, y, discharge);
+  let best = NaN;
+  let least = Infinity;
+  const count = sampledCount;
+  for (let k = 0; k < count; k++) {
+    const i = sampledMinima[k]!;
+    const below = 1 + q2 * w[i - 1]!;
+    const middle = 1 + q2 * w[i]!;
+    const above = 1 + q2 * w[i + 1]!;
+    const j = below < 0 && middle >= 0 ? i - 1 : middle < 0 && above >= 0 ? i : -1;
+    if (j < 0) return undefined;
+    const a = depth[j]!;
+    const b = depth[j + 1]!;
+    const fa = 1 + q2 * w[j]!;
+    const fb = 1 + q2 * w[j + 1]!;
+    const y =
+      fb === 0
+        ? b
+        : brentRoot((x) => (x === a ? fa : x === b ? fb : f(x)), a, b, { xTolerance: depthTolerance(section, a), what: 'critical depth' });
+    if (count === 1) return y;
+    // several minima: the least energy (the first of equals, as criticalDepth compares them)
+    const e = energyAt(hs, y, discharge);
+    if (e < least) {
+      least = e;
+      best = y;
+    }
+  }
+  return best;
 }
 
 /**
@@ -204,8 +218,8 @@ function singleMinimum(hs: HydraulicSection, discharge: number): number | undefi
  */
 export function criticalDepth(hs: HydraulicSection, discharge: number): number {
   requireDischarge(discharge, 'critical depth');
-  const single = singleMinimum(hs, discharge);
-  if (single !== undefined) return single;
+  const indexed = indexedCriticalDepth(hs, discharge);
+  if (indexed !== undefined) return indexed;
   const extrema = specificEnergyExtrema(hs, discharge);
   const depths = extrema.minima;
   let best = depths[0]!;
