@@ -129,6 +129,56 @@ export function pointState(hs: HydraulicSection, y: number, discharge: number): 
   );
 }
 
+/**
+ * A state to be evaluated again and again in place, for the trial depths of a root search: the same values as
+ * pointState, without a new object (and its boxed numbers) per trial; `fixed()` turns the one kept into a state.
+ * Its dE/dy is that of the state it would become (worked out on each read).
+ */
+export class TrialState implements PointState {
+  depth = NaN;
+  area = NaN;
+  topWidth = NaN;
+  conveyance = NaN;
+  alpha = NaN;
+  velocityHead = NaN;
+  energy = NaN;
+  frictionSlope = NaN;
+  force = NaN;
+  constructor(
+    private readonly hs: HydraulicSection,
+    private readonly discharge: number,
+  ) {}
+  /** the state at depth y, as pointState gives it (0 < y ≤ maxDepth) */
+  at(y: number): this {
+    const hs = this.hs;
+    const e = hs.section.elements(y);
+    const k = conveyanceAndAlpha(hs, y, this.discharge);
+    const g = hs.units.g;
+    const q2 = this.discharge * this.discharge;
+    const a = e.area;
+    this.depth = y;
+    this.area = a;
+    this.topWidth = e.topWidth;
+    this.conveyance = k.conveyance;
+    this.alpha = k.alpha;
+    this.velocityHead = (k.alpha * q2) / (2 * g * a * a);
+    this.energy = y + this.velocityHead;
+    this.frictionSlope = k.conveyance > 0 ? q2 / (k.conveyance * k.conveyance) : Infinity;
+    this.force = q2 / (g * a) + e.firstMoment;
+    return this;
+  }
+  /** the current trial as a state of its own (no evaluation) */
+  fixed(): PointState {
+    return new State(this.hs, this.discharge, this.depth, this.area, this.topWidth, this.conveyance, this.alpha, this.velocityHead, this.energy, this.frictionSlope, this.force);
+  }
+  get dEdy(): number {
+    return this.fixed().dEdy;
+  }
+  get conveyanceSlope(): number {
+    return this.fixed().conveyanceSlope;
+  }
+}
+
 /** dy/dx of the gradually varied flow equation at a state, with dE/dy floored in magnitude (keeps it finite). */
 export function depthGradient(state: PointState, slope: number, floor = 0): number {
   let d = state.dEdy;

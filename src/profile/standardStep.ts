@@ -34,7 +34,7 @@ import {
   profileMaxSteps,
   stepGrowthLimit,
 } from '../core/tolerances.js';
-import { pointState, type PointState } from './energy.js';
+import { pointState, type PointState, TrialState } from './energy.js';
 import { meanFrictionSlope } from './frictionMean.js';
 import {
   type StretchProfile,
@@ -194,16 +194,15 @@ export function energyStep(
   const width = guess !== undefined ? Math.max(0.25 * Math.abs(guess - s1.depth), xTolerance * 100) : 0;
 
   if (spec.lazyCritical && guess !== undefined && guess > 0 && guess <= top) {
-    // inside the section only (no critical-depth floor: that would need critical depth)
-    const inside = (y: number) => {
-      last = pointState(spec.hs, y > top ? top : y, q);
-      return residualOf(last);
-    };
+    // inside the section only (no critical-depth floor: that would need critical depth); the trials are evaluated in
+    // one reused state, and the depth found is kept as its own state
+    const trial = new TrialState(spec.hs, q);
+    const inside = (y: number) => residualOf(trial.at(y > top ? top : y));
     // the residual's slope is about dE/dy of the known state (friction adds a little): a Newton-sized bracket
     const bracket = bracketFrom(inside, guess, width, guess * lazyBracketFloor, top, rising, Math.abs(s1.dEdy));
     if (bracket) {
       const y = closeBracket(inside, bracket, xTolerance, what);
-      const state = last !== undefined && last.depth === y ? last : pointState(spec.hs, y, q);
+      const state = trial.depth === y ? trial.fixed() : pointState(spec.hs, y, q);
       if (rising * state.dEdy >= nearCriticalBand) return { state };
     }
   }
