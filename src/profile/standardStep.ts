@@ -310,6 +310,16 @@ function localError(x1: number, sf1: number, x2: number, sf2: number, x3: number
   return (h * h * h * Math.abs(second)) / (12 * d);
 }
 
+/** True when a break depth of the section (Section.breakDepths) lies strictly between two depths. */
+function straddlesBreak(spec: StretchSpec, a: number, b: number): boolean {
+  const breaks = spec.hs.section.breakDepths;
+  if (breaks === undefined) return false;
+  const lo = Math.min(a, b);
+  const hi = Math.max(a, b);
+  for (const d of breaks) if (d > lo && d < hi) return true;
+  return false;
+}
+
 /** A march's profile, with how much its energy errors grew on the way (see standardStep). */
 interface March extends StretchProfile {
   /** the largest |dE/dy| met divided by |dE/dy| at the end (≥ 1) */
@@ -403,11 +413,16 @@ function march(spec: StretchSpec): March {
       }
       factor = e > 0 ? Math.min(stepGrowthLimit, Math.max(0.2, 0.9 * Math.sqrt(allowed / e))) : stepGrowthLimit;
     }
-    // fill the output stations this step reached
+    // fill the output stations this step reached: by cubic Hermite interpolation, except where the step's depths
+    // straddle a break depth of the section (a bank top, a floodplain's edge), across which the profile has a kink
+    // that no smooth curve follows: there each station is balanced from the step's start by the energy equation
     const span = x2 - x;
+    const kinked = straddlesBreak(spec, state.depth, after.depth);
     for (; next < stations.length && direction * (stations[next]! - x2) <= 0; next++) {
       const t = (stations[next]! - x) / span;
-      depths.push(t >= 1 ? after.depth : hermite(t, state.depth, after.depth, gradient(state), gradient(after), span));
+      const smooth = t >= 1 ? after.depth : hermite(t, state.depth, after.depth, gradient(state), gradient(after), span);
+      const balanced = kinked && t < 1 ? energyStep(spec, x, state, stations[next]!, smooth).state : undefined;
+      depths.push(balanced !== undefined ? balanced.depth : smooth);
     }
     xb = x;
     sfb = state.frictionSlope;
