@@ -106,29 +106,6 @@ export function alphaSlopeAt(hs: HydraulicSection, y: number, discharge: number)
   return (alphaAt(hs, up, discharge) - alphaAt(hs, down, discharge)) / (up - down);
 }
 
-/** The state at depth y (0 < y ≤ maxDepth; the caller keeps y inside the section). */
-export function pointState(hs: HydraulicSection, y: number, discharge: number): PointState {
-  const e = hs.section.elements(y);
-  const { conveyance, alpha } = conveyanceAndAlpha(hs, y, discharge);
-  const g = hs.units.g;
-  const q2 = discharge * discharge;
-  const a = e.area;
-  const velocityHead = (alpha * q2) / (2 * g * a * a);
-  return new State(
-    hs,
-    discharge,
-    y,
-    a,
-    e.topWidth,
-    conveyance,
-    alpha,
-    velocityHead,
-    y + velocityHead,
-    conveyance > 0 ? q2 / (conveyance * conveyance) : Infinity,
-    q2 / (g * a) + e.firstMoment,
-  );
-}
-
 /**
  * A state to be evaluated again and again in place, for the trial depths of a root search: the same values as
  * pointState, without a new object (and its boxed numbers) per trial; `fixed()` turns the one kept into a state.
@@ -145,9 +122,15 @@ export class TrialState implements PointState {
   frictionSlope = NaN;
   force = NaN;
   constructor(
-    private readonly hs: HydraulicSection,
-    private readonly discharge: number,
+    private hs: HydraulicSection,
+    private discharge: number,
   ) {}
+  /** the same object, for another section or discharge */
+  use(hs: HydraulicSection, discharge: number): this {
+    this.hs = hs;
+    this.discharge = discharge;
+    return this;
+  }
   /** the state at depth y, as pointState gives it (0 < y ≤ maxDepth) */
   at(y: number): this {
     const hs = this.hs;
@@ -177,6 +160,15 @@ export class TrialState implements PointState {
   get conveyanceSlope(): number {
     return this.fixed().conveyanceSlope;
   }
+}
+
+/** pointState's working object (the values are worked out in it, then fixed into a state of their own) */
+let shared: TrialState | undefined;
+
+/** The state at depth y (0 < y ≤ maxDepth; the caller keeps y inside the section). */
+export function pointState(hs: HydraulicSection, y: number, discharge: number): PointState {
+  shared ??= new TrialState(hs, discharge);
+  return shared.use(hs, discharge).at(y).fixed();
 }
 
 /** dy/dx of the gradually varied flow equation at a state, with dE/dy floored in magnitude (keeps it finite). */
