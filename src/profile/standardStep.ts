@@ -179,13 +179,6 @@ export function energyStep(
     ? (s: PointState) =>
         s.energy - s1.energy - spec.slope * delta + meanFrictionSlope(spec.averaging, s1, s, q) * delta + lossSign * extraLoss(s1, s)
     : (s: PointState) => s.energy - s1.energy - spec.slope * delta + meanFrictionSlope(spec.averaging, s1, s, q) * delta;
-  // the last state evaluated is kept: Brent ends on it, which saves one evaluation per step
-  let last: PointState | undefined;
-  const residual = (y: number) => {
-    last = stateAt(spec, y);
-    return residualOf(last);
-  };
-  const solved = (y: number): StepOutcome => ({ state: last !== undefined && last.depth === y ? last : stateAt(spec, y) });
   const xTolerance = spec.tolerance * energyStepDepthFraction;
   const what = 'standard step depth';
   const subcritical = spec.regime === 'subcritical';
@@ -207,6 +200,14 @@ export function energyStep(
     }
   }
 
+  // (made only past the surveyed path above, which returns on most steps of a survey) the last state evaluated is
+  // kept: Brent ends on it, which saves one evaluation per step
+  let last: PointState | undefined;
+  const residual = (y: number) => {
+    last = stateAt(spec, y);
+    return residualOf(last);
+  };
+  const solved = (y: number): StepOutcome => ({ state: last !== undefined && last.depth === y ? last : stateAt(spec, y) });
   const yc = spec.criticalDepth;
   const branchLow = subcritical ? yc : floorDepth(spec);
   const branchHigh = subcritical ? top : yc;

@@ -70,6 +70,12 @@ class NodeStep implements StretchSpec {
   readonly normalDepth = null;
   readonly lazyCritical: boolean;
   private node = 0;
+  /** the upstream node of the current interval, and whether the step runs downstream (the eddy loss needs both) */
+  private upstream: SurveyNode;
+  private downstreamward = false;
+  /** the eddy loss between the known state and a trial one, for the current interval (one function for the run) */
+  readonly eddy = (known: PointState, trial: PointState): number =>
+    this.downstreamward ? eddyLoss(this.upstream, known, trial) : eddyLoss(this.upstream, trial, known);
   constructor(
     private readonly nodes: readonly SurveyNode[],
     private readonly critical: (node: number) => number,
@@ -78,10 +84,13 @@ class NodeStep implements StretchSpec {
     readonly averaging: FrictionAveraging,
   ) {
     this.hs = nodes[0]!.section;
+    this.upstream = nodes[0]!;
     this.lazyCritical = regime === 'subcritical';
   }
-  moveTo(node: number, slope: number, delta: number, startDepth: number, tolerance: number): void {
+  moveTo(node: number, upstream: number, slope: number, delta: number, startDepth: number, tolerance: number): void {
     this.node = node;
+    this.upstream = this.nodes[upstream]!;
+    this.downstreamward = delta > 0;
     this.hs = this.nodes[node]!.section;
     this.slope = slope;
     this.stations[1] = delta;
@@ -125,15 +134,13 @@ export function surveyedStretch(
     const d = Math.max(a, b);
     const length = flowLength(nodes, u);
     const delta = b > a ? length : -length;
-    spec.moveTo(b, (nodes[u]!.bedElevation - nodes[d]!.bedElevation) / length, delta, known.depth, tolerance(b));
-    const upstreamNode = nodes[u]!;
-    const loss = (s1: PointState, s2: PointState) => (b > a ? eddyLoss(upstreamNode, s1, s2) : eddyLoss(upstreamNode, s2, s1));
+    spec.moveTo(b, u, (nodes[u]!.bedElevation - nodes[d]!.bedElevation) / length, delta, known.depth, tolerance(b));
     // the next depth guessed by carrying on the last change (a survey's nodes are close: the change is smooth). Only
     // on the subcritical branch: in a compound section the supercritical residual need not be monotone (α varies),
     // and a bracket near a carried-on guess can then find a depth the whole-branch search rules out, so that run
     // keeps the known depth as its guess (and the search it always had)
     const guess = subcritical && k >= 2 ? Math.max(known.depth + (known.depth - depths[k - 2]!), 0.5 * known.depth) : known.depth;
-    const outcome = energyStep(spec, 0, known, delta, guess, loss);
+    const outcome = energyStep(spec, 0, known, delta, guess, spec.eddy);
     if (outcome.stop?.reason === 'full') throw new SectionTopReached(nodes[b]!.station, nodes[b]!.section.section.maxDepth);
     if (!outcome.state) {
       depths.push(critical(b));
