@@ -28,6 +28,7 @@ import {
   extendSectionError,
   type Extrema,
   requireDischarge,
+  slopeRootBeside,
   weightedExtrema,
   smallestDepth,
   unboundedTop,
@@ -180,26 +181,15 @@ function indexedCriticalDepth(hs: HydraulicSection, discharge: number): number |
   sampledCount = 0;
   if (indexedExtrema(curve.index, q2, collectMinimum) || sampledCount === 0) return undefined;
   const w = curve.slopeWeight;
-  const depth = curve.depth;
-  const f = (y: number) => energySlopeAt(hs, y, discharge);
+  const slopeAt = (j: number) => 1 + q2 * w[j]!;
+  const at = (y: number) => energySlopeAt(hs, y, discharge);
+  const options = (a: number) => ({ xTolerance: depthTolerance(section, a), what: 'critical depth' });
   let best = NaN;
   let least = Infinity;
   const count = sampledCount;
   for (let k = 0; k < count; k++) {
-    const i = sampledMinima[k]!;
-    const below = 1 + q2 * w[i - 1]!;
-    const middle = 1 + q2 * w[i]!;
-    const above = 1 + q2 * w[i + 1]!;
-    const j = below < 0 && middle >= 0 ? i - 1 : middle < 0 && above >= 0 ? i : -1;
-    if (j < 0) return undefined;
-    const a = depth[j]!;
-    const b = depth[j + 1]!;
-    const fa = 1 + q2 * w[j]!;
-    const fb = 1 + q2 * w[j + 1]!;
-    const y =
-      fb === 0
-        ? b
-        : brentRoot((x) => (x === a ? fa : x === b ? fb : f(x)), a, b, { xTolerance: depthTolerance(section, a), what: 'critical depth' });
+    const y = slopeRootBeside(curve.depth, sampledMinima[k]!, true, slopeAt, at, options);
+    if (y === undefined) return undefined;
     if (count === 1) return y;
     // several minima: the least energy (the first of equals, as criticalDepth compares them)
     const e = energyAt(hs, y, discharge);

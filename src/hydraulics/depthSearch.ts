@@ -4,7 +4,7 @@
  * given value). All root finding is bracketed (Brent 1973, in core/roots.ts); no loop is unbounded.
  */
 import { HydraulicError, NumericalError } from '../core/errors.js';
-import { brentMinimum, brentRoot, expandUpward } from '../core/roots.js';
+import { brentMinimum, brentRoot, expandUpward, type RootOptions } from '../core/roots.js';
 import {
   crownRoundoffFraction,
   depthAbsoluteTolerance,
@@ -152,6 +152,35 @@ export interface SampledSlope {
   readonly at: (y: number) => number;
 }
 
+/**
+ * The extremum sampled at x[i] as the root of the curve's slope, where the slope (sampled values slopeAt(j), exact
+ * values at) changes sign in one of the two sample intervals beside it, the extremum's way (a minimum: − to +; a
+ * maximum: + to −): Brent's method in that interval, its end values known. Undefined where it changes sign in
+ * neither (a jump of the curve, or slopes unknown): the caller then minimises the curve itself.
+ */
+export function slopeRootBeside(
+  x: ArrayLike<number>,
+  i: number,
+  minimum: boolean,
+  slopeAt: (j: number) => number,
+  at: (y: number) => number,
+  options: (a: number) => RootOptions,
+): number | undefined {
+  const sign = minimum ? 1 : -1;
+  const below = sign * slopeAt(i - 1);
+  const middle = sign * slopeAt(i);
+  const above = sign * slopeAt(i + 1);
+  // on the extremum's side the signed slope rises through 0: below < 0 ≤ middle, or middle < 0 ≤ above
+  const j = below < 0 && middle >= 0 ? i - 1 : middle < 0 && above >= 0 ? i : -1;
+  if (j < 0) return undefined;
+  const a = x[j]!;
+  const b = x[j + 1]!;
+  const fa = slopeAt(j);
+  const fb = slopeAt(j + 1);
+  if (fb === 0) return b;
+  return brentRoot((y) => (y === a ? fa : y === b ? fb : at(y)), a, b, options(a));
+}
+
 /** A refinement's error with its label made now (see pendingLabel). */
 function relabel(error: unknown, what: () => string): unknown {
   if (error instanceof NumericalError && error.message.startsWith(pendingLabel)) {
@@ -191,23 +220,8 @@ export function weightedExtrema(
   const slopeAt = (i: number): number =>
     typeof slopeBase === 'number' ? slopeBase + q2 * slope!.weight[i]! : slopeBase![i]! + q2 * slope!.weight[i]!;
   const refine = (i: number, minimum: boolean): number => {
-    if (slope !== undefined) {
-      const sign = minimum ? 1 : -1;
-      const below = sign * slopeAt(i - 1);
-      const middle = sign * slopeAt(i);
-      const above = sign * slopeAt(i + 1);
-      // on the minimum's side the signed slope rises through 0: below < 0 ≤ middle, or middle < 0 ≤ above
-      const j = below < 0 && middle >= 0 ? i - 1 : middle < 0 && above >= 0 ? i : -1;
-      if (j >= 0) {
-        const a = x[j]!;
-        const b = x[j + 1]!;
-        const fa = slopeAt(j);
-        const fb = slopeAt(j + 1);
-        if (fb === 0) return b;
-        return brentRoot((y) => (y === a ? fa : y === b ? fb : slope.at(y)), a, b, options(a));
-      }
-    }
-    return brentMinimum(minimum ? f : negative, x[i - 1]!, x[i + 1]!, options(x[i - 1]!));
+    const root = slope === undefined ? undefined : slopeRootBeside(x, i, minimum, slopeAt, slope.at, (a) => options(a));
+    return root ?? brentMinimum(minimum ? f : negative, x[i - 1]!, x[i + 1]!, options(x[i - 1]!));
   };
   const visit = (i: number, minimum: boolean): void => {
     if (minimum) minima.push(refine(i, true));

@@ -74,7 +74,7 @@ class State implements PointState {
       let dEdy = 1 - (this.alpha * q2 * this.topWidth) / (g * a * a * a);
       if (alphaVaries(this.hs)) {
         // dα/dy from the perimeter rates (dK/dy comes with it), else by differencing
-        const alphaSlope = this.#slopes() ? slopeScratch[SlopeSlot.alphaSlope]! : alphaSlopeAt(this.hs, this.depth, this.discharge);
+        const alphaSlope = this.#slopes() ? slopeScratch[SlopeSlot.alphaSlope]! : alphaSlopeByDifference(this.hs, this.depth, this.discharge);
         dEdy += (q2 / (2 * g * a * a)) * alphaSlope;
       }
       this.#dEdy = dEdy;
@@ -95,11 +95,10 @@ class State implements PointState {
 }
 
 /**
- * dα/dy at depth y: from the subsections' perimeter rates where the section reports them (exact, and one look-up),
- * otherwise by a central difference kept inside the section (Darcy–Weisbach, whose α depends on the discharge).
+ * dα/dy at depth y by a central difference kept inside the section, where the perimeter rates give no analytic form
+ * (Darcy–Weisbach, whose α depends on the discharge, or a section that reports no rates; State.dEdy tries those first).
  */
-export function alphaSlopeAt(hs: HydraulicSection, y: number, discharge: number): number {
-  if (conveyanceSlopesInto(hs, y, slopeScratch)) return slopeScratch[SlopeSlot.alphaSlope]!;
+function alphaSlopeByDifference(hs: HydraulicSection, y: number, discharge: number): number {
   const h = alphaDerivativeStep * Math.max(y, hs.section.lengthScale);
   const up = Math.min(y + h, hs.section.maxDepth);
   const down = Math.max(y - h, 0.5 * y);
