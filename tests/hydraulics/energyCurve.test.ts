@@ -36,7 +36,7 @@ describe('energyCurve', () => {
 
   it('criticalDepth(compound) gives the least-energy minimum of criticalDepths exactly (its one-minimum shortcut included)', () => {
     // the shortcut for one sampled minimum must give the general search's depth; the least energy is compared here
-    // directly with E at each minimum (the definition of the critical depth of least energy, Blalock & Sturm 1981)
+    // directly with E at each minimum (the definition of the critical depth of least energy, Blalock & Sturm 1981, from memory)
     const hs = compound();
     for (const q of [1, 5, 20, 60, 150, 400, 900]) {
       const all = criticalDepths(hs, q);
